@@ -1,0 +1,29 @@
+import { DataSource } from 'typeorm';
+import dataSource from './data-source';
+import { seedDemoCompany } from './seeds/demo-company';
+
+/**
+ * The demo company and its data. Safe to run twice: every step looks for what it would create.
+ * Add a step per bounded context (catalogue, stock, jobs…) after the company step.
+ */
+export async function seedDemo(ds: DataSource): Promise<void> {
+  await ds.transaction(async (m) => {
+    // One seed at a time, even if two processes start together.
+    await m.query(`SELECT pg_advisory_xact_lock(7301)`);
+    await seedDemoCompany(m);
+  });
+}
+
+if (require.main === module) {
+  dataSource
+    .initialize()
+    .then(async (ds) => {
+      await seedDemo(ds);
+      await ds.destroy();
+      console.log('demo data: ready');
+    })
+    .catch((err: unknown) => {
+      console.error(err);
+      process.exit(1);
+    });
+}
