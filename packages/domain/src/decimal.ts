@@ -2,9 +2,9 @@ import DecimalJs from 'decimal.js';
 import { DomainError } from './errors';
 
 /**
- * The package's own Decimal constructor: 40 significant digits, half-up rounding, plain notation
+ * The Decimal constructor of @potlife/domain: 40 significant digits, half-up rounding, plain notation
  * for every value a roof can produce. A clone, so the global decimal.js settings of the apps that
- * use this package are left alone.
+ * use it are left alone.
  */
 export const Decimal = DecimalJs.clone({
   precision: 40,
@@ -14,7 +14,7 @@ export const Decimal = DecimalJs.clone({
 });
 export type Decimal = DecimalJs;
 
-/** Every quantity and amount the package accepts: a decimal string, a number or a Decimal. */
+/** Every quantity and amount @potlife/domain accepts: a decimal string, a number or a Decimal. */
 export type Numeric = string | number | Decimal;
 
 /** Pence in a pound: money is kept to two decimal places. */

@@ -8,7 +8,7 @@
  */
 export type DomainErrorCode = 'invalid-input' | 'invalid-polygon' | 'too-cold' | 'not-allowed' | 'negative-balance';
 
-/** The one error the domain package throws: a sentence a person can act on, and a code. */
+/** The one error @potlife/domain throws: a sentence a person can act on, and a code. */
 export class DomainError extends Error {
   readonly code: DomainErrorCode;
 

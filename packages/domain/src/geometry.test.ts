@@ -27,7 +27,7 @@ describe('polygonArea', () => {
     ['closing corner repeated', [[0, 0], [3, 0], [3, 2], [0, 2], [0, 0]], '6'],
     ['triangle closed back to its start', [[0, 0], [1, 0], [0, 1], [0, 0]], '0.5'],
     ['string coordinates, exact decimals', [['0.1', '0.1'], ['0.3', '0.1'], ['0.3', '0.3'], ['0.1', '0.3']], '0.04'],
-    ['a straight corner on a side', [[0, 0], [2, 0], [4, 0], [4, 1], [0, 1]], '4'],
+    ['a straight corner along a segment', [[0, 0], [2, 0], [4, 0], [4, 1], [0, 1]], '4'],
     ['millimetre rectangle in metres', [[0, 0], [0.001, 0], [0.001, 0.001], [0, 0.001]], '0.000001'],
   ])('%s → %s m²', (_name, points, expected) => {
     expect(polygonArea(points).toString()).toBe(expected);
@@ -45,8 +45,8 @@ describe('polygonArea', () => {
     ['all on one line', [[0, 0], [1, 0], [2, 0]], /zero area/],
     ['bow-tie', [[0, 0], [1, 1], [1, 0], [0, 1]], /cross or touch/],
     ['figure of eight touching at a corner', [[0, 0], [2, 0], [2, 2], [4, 2], [4, 4], [2, 4], [2, 2], [0, 2]], /cross or touch/],
-    ['side folds back over itself', [[0, 0], [3, 0], [1, 0], [1, 2]], /folds back/],
-    ['spike returning along a side', [[0, 0], [4, 0], [4, 2], [4, 1], [0, 1]], /folds back/],
+    ['a segment folds back over the one before', [[0, 0], [3, 0], [1, 0], [1, 2]], /folds back/],
+    ['a spike returning along a segment', [[0, 0], [4, 0], [4, 2], [4, 1], [0, 1]], /folds back/],
   ])('%s', (_name, points, message) => {
     expect(() => polygonArea(points)).toThrow(DomainError);
     expect(() => polygonArea(points)).toThrow(message);

@@ -5,7 +5,7 @@ import { DomainError } from './errors';
 export type Point = readonly [Numeric, Numeric];
 
 /**
- * A corner as whole numbers: every coordinate times 10^places, so the tests for crossing sides and
+ * A corner as whole numbers: every coordinate times 10^places, so the tests for crossing segments and
  * the shoelace sum are exact integer arithmetic (and fast), whatever decimals the corners carry.
  */
 type P = { x: bigint; y: bigint };
@@ -92,7 +92,7 @@ function toPoints(points: readonly Point[]): { pts: P[]; places: number } {
 /**
  * The area in m² of a simple polygon with corners in metres, in either winding (shoelace formula,
  * exact). A repeated closing corner is accepted. Throws DomainError (`invalid-polygon`) for fewer
- * than 3 corners, two corners in a row at the same place, sides that cross, touch or fold back, or
+ * than 3 corners, two corners in a row at the same place, outline segments that cross, touch or fold back, or
  * zero area.
  */
 export function polygonArea(points: readonly Point[]): Decimal {
@@ -121,22 +121,22 @@ export function polygonArea(points: readonly Point[]): Decimal {
   for (let i = 0; i < n; i++) {
     const a = at(i);
     const b = at(i + 1);
-    // Neighbouring sides meet only at their shared corner; they may not fold back over each other.
+    // Neighbouring segments meet only at their shared corner; they may not fold back over each other.
     const c = at(i + 2);
     if (cross(a, b, c) === 0n && (a.x - b.x) * (c.x - b.x) + (a.y - b.y) * (c.y - b.y) > 0n) {
       throw new DomainError(
-        `The polygon folds back on itself at corner ${((i + 1) % n) + 1}; the sides must not overlap.`,
+        `The polygon folds back on itself at corner ${((i + 1) % n) + 1}; its segments must not overlap.`,
         'invalid-polygon',
       );
     }
-    // Sides that are not neighbours may not touch at all.
+    // Segments that are not neighbours may not touch at all.
     for (let j = i + 2; j < n; j++) {
       if (i === 0 && j === n - 1) {
         continue;
       }
       if (segmentsTouch(a, b, at(j), at(j + 1))) {
         throw new DomainError(
-          `Sides ${i + 1} and ${j + 1} of the polygon cross or touch; draw the area as a simple outline or split it into areas.`,
+          `Segments ${i + 1} and ${j + 1} of the polygon's outline cross or touch; draw the area as a simple outline or split it into areas.`,
           'invalid-polygon',
         );
       }
