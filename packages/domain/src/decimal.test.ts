@@ -25,6 +25,15 @@ describe('toDecimal', () => {
     },
   );
 
+  it('copies a Decimal from another constructor so it works to 40 digits', () => {
+    const foreign = new DecimalJs(1);
+    const d = toDecimal(foreign);
+    expect(d).not.toBe(foreign);
+    expect(d.div(3).toString()).toHaveLength(42);
+    const own = new Decimal(1);
+    expect(toDecimal(own)).toBe(own);
+  });
+
   it('leaves the global decimal.js settings alone', () => {
     expect(DecimalJs.precision).toBe(20);
     expect(DecimalJs.rounding).toBe(DecimalJs.ROUND_HALF_UP);

@@ -30,10 +30,12 @@ export const HUNDRED = new Decimal(100);
  */
 export function toDecimal(value: Numeric, name = 'value'): Decimal {
   if (value instanceof Decimal) {
+    // decimal.js counts an instance of any of its constructors; one from elsewhere (the global
+    // Decimal, 20 digits) is copied so what follows works to this library's 40 digits.
     if (!value.isFinite()) {
       throw new DomainError(`${name} must be a finite number, not ${value.toString()}.`);
     }
-    return value;
+    return value.constructor === Decimal ? value : new Decimal(value);
   }
   let d: Decimal;
   try {

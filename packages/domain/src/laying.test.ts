@@ -50,11 +50,11 @@ describe('checkLayingConditions (5 °C minimum and ≤ 85 % RH: common trade pra
 
   it.each([
     ['a fine day', {}, []],
-    ['air exactly 5 °C', { airC: 5, surfaceC: 8, relativeHumidityPct: 40 }, []],
+    ['air exactly 5 °C', { airC: 5, surfaceC: 8, relativeHumidityPct: 40 }, []], // 5 °C minimum: common trade practice, no source
     ['air 4.9 °C', { airC: 4.9, surfaceC: 8, relativeHumidityPct: 40 }, ['air is 4.9 °C']],
     ['deck exactly 5 °C', { airC: 8, surfaceC: 5, relativeHumidityPct: 30 }, []],
     ['deck 4.9 °C', { airC: 8, surfaceC: 4.9, relativeHumidityPct: 30 }, ['deck is 4.9 °C']],
-    ['humidity exactly 85 %', { airC: 20, surfaceC: 25, relativeHumidityPct: 85 }, []],
+    ['humidity exactly 85 %', { airC: 20, surfaceC: 25, relativeHumidityPct: 85 }, []], // ≤ 85 %: common trade practice, no source (as used with ISO 12944-7)
     ['humidity 85.1 %', { airC: 20, surfaceC: 25, relativeHumidityPct: 85.1 }, ['humidity is 85.1 %']],
     ['rain', { raining: true }, ['raining']],
     ['deck close to the dew point', { airC: 15, surfaceC: 9, relativeHumidityPct: 60 }, ['above the dew point (7.3 °C)']],
@@ -71,7 +71,7 @@ describe('checkLayingConditions (5 °C minimum and ≤ 85 % RH: common trade pra
   });
 
   it.each([
-    [13, true], // deck exactly 3 K above a dew point of 10 °C
+    [13, true], // deck exactly 3 K above a dew point of 10 °C: ISO 8502-4, ISO 12944-7
     [12.99, false],
   ])('at 100 %% RH (dew point = air 10 °C) a deck of %s °C is ok: %s', (deck, ok) => {
     const rules = { ...DEFAULT_LAYING_RULES, maxRelativeHumidityPct: 100 };
@@ -92,15 +92,15 @@ describe('checkLayingConditions (5 °C minimum and ≤ 85 % RH: common trade pra
 
 describe('catalystPercent (1–4 %, ~3 % cold, 2 % at 20 °C, ~1 % hot: common trade practice, no source)', () => {
   it.each([
-    [5, '3'],
+    [5, '3'], // ~3 % cold: common trade practice, no source
     [9.99, '3'],
     [10, '2.5'],
     [14.9, '2.5'],
     [15, '2'],
-    [20, '2'],
+    [20, '2'], // 2 % at 20 °C: common trade practice, no source
     [24.99, '2'],
     [25, '1.5'],
-    [30, '1'],
+    [30, '1'], // ~1 % hot: common trade practice, no source
     [40, '1'],
     ['20', '2'],
   ])('%s °C → %s %%', (t, pct) => {
@@ -137,14 +137,14 @@ describe('catalystPercent (1–4 %, ~3 % cold, 2 % at 20 °C, ~1 % hot: common t
 
 describe('checkFall: BS 6229:2018, design fall 1:40, finished fall at least 1:80', () => {
   it.each([
-    [1, 40, 'ok', '1:40'],
+    [1, 40, 'ok', '1:40'], // design fall 1:40: BS 6229:2018
     [1, 39, 'ok', '1:39'],
     [1, 20, 'ok', '1:20'],
     [25, 1000, 'ok', '1:40'], // 25 mm in 1 m: the same units for rise and run
     [1, 40.01, 'warning', '1:40'],
     [1, 60, 'warning', '1:60'],
-    [12.5, 1000, 'warning', '1:80'], // exactly 1:80 still warns
-    [1, 80.01, 'error', '1:80'],
+    [12.5, 1000, 'warning', '1:80'], // exactly 1:80 still warns: BS 6229:2018 finished fall
+    [1, 80.01, 'error', '1:80'], // flatter than 1:80: BS 6229:2018
     [1, 120, 'error', '1:120'],
     [0, 10, 'error', 'level'],
   ])('rise %s in %s → %s', (rise, run, level, fragment) => {
@@ -167,7 +167,7 @@ describe('slopeCategory: ETAG 005 S1 < 5 %, S2 5–10 %, S3 10–30 %, S4 > 30 %
   it.each([
     [0, 100, 'S1'],
     [4.99, 100, 'S1'],
-    [5, 100, 'S2'],
+    [5, 100, 'S2'], // ETAG 005 (middle bands from memory)
     [9.99, 100, 'S2'],
     [10, 100, 'S3'],
     [30, 100, 'S3'],

@@ -66,7 +66,7 @@ describe('isExpired, daysToExpiry: usable on the expiry date, expired the day af
   it.each([
     ['2025-03-31', '2025-03-30', false, 1],
     ['2025-03-31', '2025-03-31', false, 0],
-    ['2025-03-31', '2025-04-01', true, -1],
+    ['2025-03-31', '2025-04-01', true, -1], // never used after expiry: classification-society rules for composite materials
     ['2025-03-31', '2025-03-29', false, 2], // across the clocks going forward
     ['2026-01-01', '2025-01-01', false, 365],
     ['2024-01-01', '2025-01-01', true, -366],
@@ -191,8 +191,8 @@ describe('allocateFefo: first expired, first out, from usable lots in date', () 
 describe('checkSegregation: organic peroxide apart from flammables (HSE CS21; NFPA 432, now NFPA 400)', () => {
   it.each<[HazardClass, HazardClass[], boolean, HazardClass[]]>([
     ['5.2', [], true, []],
-    ['5.2', ['3'], false, ['3']], // catalyst into a flammables store
-    ['3', ['5.2'], false, ['5.2']], // and the reverse
+    ['5.2', ['3'], false, ['3']], // catalyst into a flammables store: HSE CS21; NFPA 400
+    ['3', ['5.2'], false, ['5.2']], // and the reverse: HSE CS21; NFPA 400
     ['5.2', ['3', '3', '5.2', '8'], false, ['3']],
     ['5.2', ['5.2', 'none'], true, []],
     ['3', ['3', '8', '2'], true, []],
@@ -232,9 +232,9 @@ describe('checkFlammablesCapacity (50 L in a workroom: HSE HSG51; warning from 9
     ['0', '10', undefined, 'ok', '10'],
     ['0', '0', undefined, 'ok', '0'],
     ['40', '4.99', undefined, 'ok', '44.99'],
-    ['40', '5', undefined, 'warning', '45'], // 90 % of 50 L
-    ['45', '5', undefined, 'warning', '50'], // exactly full
-    ['45', '5.01', undefined, 'refused', '50.01'],
+    ['40', '5', undefined, 'warning', '45'], // 90 % of 50 L: Potlife's own warning, no source
+    ['45', '5', undefined, 'warning', '50'], // exactly full: 50 L, HSE HSG51
+    ['45', '5.01', undefined, 'refused', '50.01'], // over 50 L: HSE HSG51
     ['20', '7', '30', 'warning', '27'], // a smaller cabinet
     ['20', '11', '30', 'refused', '31'],
   ])('%s L + %s L in a %s L cabinet → %s', (current, add, capacity, level, total) => {
@@ -259,7 +259,7 @@ describe('checkFlammablesCapacity (50 L in a workroom: HSE HSG51; warning from 9
 describe('checkStorageTemperature (resin, topcoat, catalyst at ≤ 25 °C: common trade practice, no source)', () => {
   it.each([
     ['20', 5, 25, true, 'none'],
-    ['25', 5, 25, true, 'none'],
+    ['25', 5, 25, true, 'none'], // ≤ 25 °C: common trade practice, no source
     ['5', 5, 25, true, 'none'],
     ['25.1', 5, 25, false, 'too-warm'],
     ['4.9', 5, 25, false, 'too-cold'],
