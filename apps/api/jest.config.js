@@ -2,10 +2,11 @@
  * real PostgreSQL and Redis that scripts/test.sh starts. */
 const base = {
   moduleFileExtensions: ['js', 'json', 'ts'],
-  transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json', isolatedModules: true }] },
+  transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json' }] },
   testEnvironment: 'node',
 };
 module.exports = {
+  testTimeout: 60000,
   projects: [
     { ...base, displayName: 'unit', rootDir: __dirname, testMatch: ['<rootDir>/src/**/*.spec.ts'] },
     {
@@ -14,7 +15,6 @@ module.exports = {
       rootDir: __dirname,
       testMatch: ['<rootDir>/test/**/*.e2e-spec.ts'],
       globalSetup: '<rootDir>/test/global-setup.ts',
-      testTimeout: 60000,
     },
   ],
 };

@@ -28,6 +28,7 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
   Object.assign(process.env, {
     NODE_ENV: 'test',
     DATABASE_URL: databaseUrl,
+    REDIS_URL: process.env.REDIS_URL ?? 'redis://127.0.0.1:6391',
     REDIS_PREFIX: `t-${name}`,
     JWT_SECRET: process.env.JWT_SECRET ?? 'a-test-secret-that-is-long-enough-to-pass',
     WEB_DIST_DIR: '/nonexistent',
