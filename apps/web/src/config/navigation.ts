@@ -1,0 +1,66 @@
+import { IconHome2, IconMailbox, IconUsers, type Icon } from '@tabler/icons-react';
+import type { Role } from '../lib/roles';
+import { paths } from './paths';
+
+// Who sees what: one row per navigation entry, with the roles that may open it. The navbar lists
+// the rows the user's role may see, and the router guards each screen with the same roles.
+// Later screens (stock, receipts, jobs, estimates, purchase orders...) add their row here.
+
+export type NavKey = 'home' | 'users' | 'mailOutbox';
+
+export interface NavEntry {
+  key: NavKey;
+  label: string;
+  to: string;
+  icon: Icon;
+  roles: readonly Role[];
+  /** One line on what the screen is for (the home page lists it). */
+  summary: string;
+}
+
+export const navigation: readonly NavEntry[] = [
+  {
+    key: 'home',
+    label: 'Home',
+    to: paths.home,
+    icon: IconHome2,
+    roles: ['owner', 'estimator', 'storeman'],
+    summary: 'What you do in Potlife.',
+  },
+  {
+    key: 'users',
+    label: 'Users',
+    to: paths.users,
+    icon: IconUsers,
+    roles: ['owner'],
+    summary: 'Invite people, change their role, deactivate those who have left.',
+  },
+  {
+    key: 'mailOutbox',
+    label: 'Mail outbox',
+    to: paths.mailOutbox,
+    icon: IconMailbox,
+    roles: ['owner'],
+    summary: 'Every e-mail Potlife has sent, as the recipient would see it.',
+  },
+];
+
+export function navigationFor(role: Role): NavEntry[] {
+  return navigation.filter((entry) => entry.roles.includes(role));
+}
+
+export function rolesFor(key: NavKey): readonly Role[] {
+  const entry = navigation.find((candidate) => candidate.key === key);
+  if (!entry) {
+    throw new Error(`No navigation entry "${key}"`);
+  }
+  return entry.roles;
+}
+
+/** Whether a nav entry is the current page: exact for home, by prefix for the others. */
+export function isActiveEntry(entry: NavEntry, pathname: string): boolean {
+  if (entry.to === paths.home) {
+    return pathname === paths.home;
+  }
+  return pathname === entry.to || pathname.startsWith(`${entry.to}/`);
+}
