@@ -1,0 +1,98 @@
+import { lazy, Suspense, type ReactNode } from 'react';
+import { useRoutes, type RouteObject } from 'react-router-dom';
+import { PageLoader } from '../components/PageLoader';
+import { rolesFor } from '../config/navigation';
+import { paths } from '../config/paths';
+import { AppLayout } from './layout/AppLayout';
+import { RequireAuth } from './layout/RequireAuth';
+import { RequireRole } from './layout/RequireRole';
+import { NotFoundRoute } from './routes/NotFoundRoute';
+
+// Each screen is its own chunk, loaded when first opened.
+const SignInRoute = lazy(() =>
+  import('../features/auth/routes/SignInRoute').then((m) => ({ default: m.SignInRoute })),
+);
+const RegisterRoute = lazy(() =>
+  import('../features/auth/routes/RegisterRoute').then((m) => ({ default: m.RegisterRoute })),
+);
+const InvitationRoute = lazy(() =>
+  import('../features/auth/routes/InvitationRoute').then((m) => ({ default: m.InvitationRoute })),
+);
+const HomeRoute = lazy(() =>
+  import('../features/home/routes/HomeRoute').then((m) => ({ default: m.HomeRoute })),
+);
+const UsersRoute = lazy(() =>
+  import('../features/users/routes/UsersRoute').then((m) => ({ default: m.UsersRoute })),
+);
+const MailOutboxRoute = lazy(() =>
+  import('../features/mail/routes/MailOutboxRoute').then((m) => ({ default: m.MailOutboxRoute })),
+);
+
+function Public({ children }: { children: ReactNode }) {
+  return <Suspense fallback={<PageLoader fullScreen />}>{children}</Suspense>;
+}
+
+export const routes: RouteObject[] = [
+  {
+    path: paths.signIn,
+    element: (
+      <Public>
+        <SignInRoute />
+      </Public>
+    ),
+  },
+  {
+    path: paths.register,
+    element: (
+      <Public>
+        <RegisterRoute />
+      </Public>
+    ),
+  },
+  {
+    path: paths.invitation,
+    element: (
+      <Public>
+        <InvitationRoute />
+      </Public>
+    ),
+  },
+  {
+    element: (
+      <RequireAuth>
+        <AppLayout />
+      </RequireAuth>
+    ),
+    children: [
+      {
+        index: true,
+        element: (
+          <RequireRole roles={rolesFor('home')}>
+            <HomeRoute />
+          </RequireRole>
+        ),
+      },
+      {
+        path: paths.users,
+        element: (
+          <RequireRole roles={rolesFor('users')}>
+            <UsersRoute />
+          </RequireRole>
+        ),
+      },
+      {
+        path: paths.mailOutbox,
+        element: (
+          <RequireRole roles={rolesFor('mailOutbox')}>
+            <MailOutboxRoute />
+          </RequireRole>
+        ),
+      },
+      { path: '*', element: <NotFoundRoute /> },
+    ],
+  },
+];
+
+export function AppRoutes() {
+  return useRoutes(routes);
+}
