@@ -6,7 +6,7 @@ import { EdgeKind, EDGE_KINDS } from './roof';
 import { DEFAULT_MAT_LAP_M, DEFAULT_TRIM_LAP_M, DEFAULT_TRIM_LENGTH_M } from './takeoff';
 
 /** Materials bought by weight, volume or length in packs of several sizes. Trims and outlets are bought by the piece. */
-export type PackedMaterial = Exclude<MaterialKind, 'trim' | 'outlet'>;
+export type PackedMaterial = Exclude<MaterialKind, 'trim' | 'outlet' | 'other'>;
 
 /** Pack sizes per material, in the unit of its estimate line (kg, L, m, each). */
 export type PackSizes = Readonly<Partial<Record<PackedMaterial, readonly Numeric[]>>>;

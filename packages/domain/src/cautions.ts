@@ -75,6 +75,7 @@ export function cautionIdsFor(kind: MaterialKind): CautionId[] {
     case 'adhesive':
     case 'batten':
     case 'fixing':
+    case 'other':
       return ['work-at-height'];
     default:
       return unexpected('material kind', kind);

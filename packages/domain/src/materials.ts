@@ -13,7 +13,8 @@ export type MaterialKind =
   | 'acetone'
   | 'adhesive'
   | 'batten'
-  | 'fixing';
+  | 'fixing'
+  | 'other';
 
 export const MATERIAL_KINDS: readonly MaterialKind[] = Object.freeze([
   'mat',
@@ -27,4 +28,5 @@ export const MATERIAL_KINDS: readonly MaterialKind[] = Object.freeze([
   'adhesive',
   'batten',
   'fixing',
+  'other',
 ]);
