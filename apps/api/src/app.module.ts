@@ -17,6 +17,10 @@ import { HealthController } from './health/health.controller';
 import { MailModule } from './mail/mail.module';
 import { RedisModule } from './redis/redis.module';
 import { UsersModule } from './users/users.module';
+import { CatalogueModule } from './catalogue/catalogue.module';
+import { SuppliersModule } from './suppliers/suppliers.module';
+import { StockModule } from './stock/stock.module';
+import { JobsModule } from './jobs/jobs.module';
 
 /** The built web app, served at `/` when it exists (production mode); `/api` stays the API's. */
 function webApp(): DynamicModule[] {
@@ -55,6 +59,10 @@ function webApp(): DynamicModule[] {
     AuthModule,
     UsersModule,
     MailModule,
+    CatalogueModule,
+    SuppliersModule,
+    StockModule,
+    JobsModule,
     ...webApp(),
   ],
   controllers: [HealthController],
