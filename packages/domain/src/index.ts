@@ -102,3 +102,6 @@ export type { PricedLine, Price, MaterialPacks } from './price';
 
 export { cautionsFor, cautionIdsFor, CAUTIONS } from './cautions';
 export type { Caution, CautionId } from './cautions';
+
+export { JOB_STATUSES, JOB_TRANSITIONS, nextJobStatuses, checkJobTransition, jobHoldsStock } from './job-status';
+export type { JobStatus, JobFacts } from './job-status';
