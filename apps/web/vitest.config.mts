@@ -9,6 +9,10 @@ export default mergeConfig(
       include: ['src/**/*.test.{ts,tsx}'],
       setupFiles: ['./src/test/setup.ts'],
       css: false,
+      // The files share one jsdom per worker (the setup file resets the token, storage,
+      // notifications and stubs after every test): about a third faster on two cores.
+      pool: 'threads',
+      isolate: false,
       restoreMocks: true,
       testTimeout: 15000,
     },

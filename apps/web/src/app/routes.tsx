@@ -1,5 +1,6 @@
 import { lazy, Suspense, type ReactNode } from 'react';
 import { useRoutes, type RouteObject } from 'react-router-dom';
+import { ErrorBoundary } from '../components/ErrorBoundary';
 import { PageLoader } from '../components/PageLoader';
 import { rolesFor } from '../config/navigation';
 import { paths } from '../config/paths';
@@ -29,7 +30,11 @@ const MailOutboxRoute = lazy(() =>
 );
 
 function Public({ children }: { children: ReactNode }) {
-  return <Suspense fallback={<PageLoader fullScreen />}>{children}</Suspense>;
+  return (
+    <ErrorBoundary>
+      <Suspense fallback={<PageLoader fullScreen />}>{children}</Suspense>
+    </ErrorBoundary>
+  );
 }
 
 export const routes: RouteObject[] = [

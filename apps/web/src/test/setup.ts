@@ -1,4 +1,5 @@
 import '@testing-library/jest-dom/vitest';
+import { notifications } from '@mantine/notifications';
 import { cleanup, configure } from '@testing-library/react';
 import { afterEach, vi } from 'vitest';
 import { clearAccessToken } from '../lib/auth-token';
@@ -33,8 +34,13 @@ window.ResizeObserver = ResizeObserverStub;
 
 Element.prototype.scrollIntoView = function scrollIntoView() {};
 
+// Downloads hand a blob URL to a link; jsdom has no blob URLs.
+URL.createObjectURL = () => 'blob:potlife-test';
+URL.revokeObjectURL = () => undefined;
+
 afterEach(() => {
   cleanup();
+  notifications.clean();
   clearAccessToken();
   window.localStorage.clear();
   window.sessionStorage.clear();
