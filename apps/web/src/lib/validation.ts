@@ -16,10 +16,10 @@ export function emailField(whose: 'your' | 'their' = 'your') {
 }
 
 /** A required name; `what` completes "Enter …". */
-export function nameField(what: string) {
-  return z
-    .string()
-    .trim()
-    .min(1, `Enter ${what}`)
-    .max(NAME_MAX_LENGTH, `Keep it to ${NAME_MAX_LENGTH} characters`);
+export function nameField(what: string, minLength = 1) {
+  const field = z.string().trim().min(1, `Enter ${what}`);
+  return (minLength > 1 ? field.min(minLength, `Use at least ${minLength} characters`) : field).max(
+    NAME_MAX_LENGTH,
+    `Keep it to ${NAME_MAX_LENGTH} characters`,
+  );
 }

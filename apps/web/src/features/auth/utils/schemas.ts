@@ -42,7 +42,8 @@ const mismatch = {
 
 export const registerSchema = z
   .object({
-    companyName: nameField("your company's name"),
+    // The API asks for at least two characters in a company name.
+    companyName: nameField("your company's name", 2),
     name: nameField('your name'),
     email: emailField(),
     ...passwordPair,
