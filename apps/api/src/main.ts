@@ -1,5 +1,4 @@
 import 'reflect-metadata';
-import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { AppModule } from './app.module';
@@ -8,10 +7,13 @@ import { validateEnv } from './config/env';
 
 async function bootstrap(): Promise<void> {
   const env = validateEnv(process.env);
-  const app = await NestFactory.create<NestExpressApplication>(AppModule, { bufferLogs: false });
+  // Start-up chatter (every module and route) only in development; warnings and errors always.
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, {
+    logger: env.NODE_ENV === 'development' ? ['log', 'warn', 'error'] : ['warn', 'error'],
+  });
   configureApp(app);
   await app.listen(env.PORT, env.HOST);
-  Logger.log(`Potlife listening on http://${env.HOST}:${env.PORT} (queue role: ${env.QUEUE_ROLE})`, 'Potlife');
+  console.log(`Potlife listening on http://${env.HOST}:${env.PORT} (queue role: ${env.QUEUE_ROLE})`);
 }
 
 bootstrap().catch((err: unknown) => {
