@@ -70,6 +70,7 @@ ensure_chromium() {
 
 start_postgres() {
   local bin; bin=$(pg_bindir)
+  PG_BIN=$bin
   mkdir -p "$POTLIFE_DATA_DIR"
   chmod 755 "$POTLIFE_DATA_DIR"
   if is_root; then
@@ -95,9 +96,8 @@ start_postgres() {
 }
 
 stop_postgres() {
-  local bin; bin=$(pg_bindir)
   if [[ ${PG_STARTED:-0} == 1 ]]; then
-    as_pg "$bin/pg_ctl" -D "$PG_DATA" -m fast -w stop >/dev/null 2>&1 || true
+    as_pg "$PG_BIN/pg_ctl" -D "$PG_DATA" -m fast -w stop >/dev/null 2>&1 || true
   fi
 }
 
@@ -116,7 +116,7 @@ start_redis() {
 
 stop_redis() {
   if [[ ${REDIS_STARTED:-0} == 1 ]]; then
-    redis-cli -h 127.0.0.1 -p "$REDIS_PORT" shutdown nosave >/dev/null 2>&1 || true
+    redis-cli -h 127.0.0.1 -p "$REDIS_PORT" shutdown >/dev/null 2>&1 || true
   fi
 }
 
@@ -139,6 +139,9 @@ wait_for_port() {
 }
 
 stop_all() {
+  # Cleanup never stops half-way: no errexit here, and each server is stopped on its own.
+  set +e
+  trap - INT TERM
   local pid
   for pid in "${STARTED_PIDS[@]:-}"; do
     [[ -n $pid ]] && kill "$pid" 2>/dev/null || true
