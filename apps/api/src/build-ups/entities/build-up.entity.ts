@@ -1,0 +1,77 @@
+import type { EdgeKind } from '@potlife/domain';
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { decimalString } from '../../common/decimal.transformer';
+
+/** The scalar rates of a build-up (domain `BuildUp`), each a decimal string. */
+export const SCALAR_RATES = [
+  'matGsm',
+  'layers',
+  'rollWidthM',
+  'lapM',
+  'resinToGlass',
+  'topcoatKgPerM2',
+  'matWastagePct',
+  'resinWastagePct',
+  'trimLengthM',
+  'trimLapM',
+  'upstandM',
+  'bandageWidthMm',
+  'bandageGsm',
+  'bandageMPerEdgeM',
+  'bandageMPerTrimJoint',
+  'bandageMPerCorner',
+  'bandageMPerPipe',
+  'bandageMPerOutlet',
+  'extraResinKgPerPipe',
+  'extraResinKgPerOutlet',
+  'acetoneLPerM2',
+  'adhesiveTrimMPerCartridge',
+  'labourHoursPerM2',
+  'labourHoursPerTrimM',
+] as const;
+export type ScalarRate = (typeof SCALAR_RATES)[number];
+
+/** Every rate of the costing engine except pack sizes (which come from the catalogue), as stored. */
+export type BuildUpRates = Record<ScalarRate, string> & {
+  catalystBands: { fromC: string; percent: string }[];
+  battenMPerEdgeM: Record<EdgeKind, string>;
+  nailsPerEdgeM: Record<EdgeKind, string>;
+};
+
+/** A company's named build-up (GLOSSARY "build-up"): the engine's rates, labour rate, markup and VAT. */
+@Entity('build_ups')
+export class BuildUp {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'company_id', type: 'uuid' })
+  companyId: string;
+
+  @Column({ type: 'varchar', length: 120 })
+  name: string;
+
+  @Column({ type: 'text', nullable: true })
+  description: string | null;
+
+  @Column({ type: 'jsonb' })
+  rates: BuildUpRates;
+
+  /** £ per labour hour */
+  @Column({ name: 'labour_rate', type: 'numeric', precision: 10, scale: 2, transformer: decimalString })
+  labourRate: string;
+
+  @Column({ name: 'markup_pct', type: 'numeric', precision: 6, scale: 2, transformer: decimalString })
+  markupPct: string;
+
+  @Column({ name: 'vat_rate_pct', type: 'numeric', precision: 5, scale: 2, transformer: decimalString })
+  vatRatePct: string;
+
+  @Column({ type: 'boolean', default: true })
+  active: boolean;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
+  updatedAt: Date;
+}

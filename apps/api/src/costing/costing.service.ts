@@ -1,0 +1,315 @@
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import {
+  choosePacks,
+  Decimal,
+  Estimate as Takeoff,
+  EstimateLine as TakeoffLine,
+  LineRole,
+  MaterialKind,
+  Numeric,
+  priceEstimate,
+  Price,
+  roundMoney,
+  Unit,
+} from '@potlife/domain';
+import { EntityManager, In, Repository } from 'typeorm';
+import { Material } from '../catalogue/entities/material.entity';
+import { toStockUnit, UnitContext } from './units';
+
+/** What the catalogue material for a role must be like, beside its kind. */
+export interface MatchContext extends UnitContext {
+  rollWidthM: string;
+  topcoatColour: string | null;
+}
+
+/** The cheapest current price of one pack size. */
+export interface PackPrice {
+  packPrice: string;
+  supplierId: string;
+  supplierName: string;
+  leadTimeDays: number;
+}
+
+export interface CostedPack {
+  size: Decimal;
+  label: string;
+  count: number;
+  price: PackPrice | null;
+  cost: Decimal | null;
+}
+
+/** One material to buy: the take-off lines that map to it, summed in its stock unit, in packs, priced. */
+export interface CostedMaterial {
+  roles: LineRole[];
+  materialKind: MaterialKind;
+  material: Material | null;
+  /** in the stock unit when there is a material, else the line's unit */
+  quantity: Decimal;
+  unit: string;
+  packs: CostedPack[];
+  packTotal: Decimal | null;
+  leftover: Decimal | null;
+  cost: Decimal | null;
+  problem: string | null;
+}
+
+export interface CostedTakeoff {
+  /** the material each role maps to (null: none in the catalogue) */
+  lineMaterials: Map<LineRole, Material | null>;
+  materials: CostedMaterial[];
+  price: Price;
+  unpriced: number;
+}
+
+/** A material the role may use, and how well it fits (lower is better). */
+type Fit = (m: Material, line: TakeoffLine, ctx: MatchContext) => number | null;
+
+const sameNumber = (a: Numeric | null | undefined, b: Numeric | null | undefined): boolean =>
+  a !== null && a !== undefined && b !== null && b !== undefined && new Decimal(a).eq(b);
+
+const isCorner = (m: Material, which: 'external' | 'internal'): boolean =>
+  m.trimKind === null && new RegExp(`\\b${which}\\b`, 'i').test(m.name) && /\bcorner/i.test(m.name);
+
+/**
+ * How each take-off role finds its catalogue material: by kind and the kind's own fields. A role
+ * with several candidates takes the best fit, then the lowest code.
+ */
+function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } {
+  switch (role) {
+    case 'mat':
+      return {
+        kind: 'mat',
+        fit: (m, _l, c) => (sameNumber(m.matGsm, c.matGsm) ? (sameNumber(m.rollWidthM, c.rollWidthM) ? 0 : 1) : null),
+        need: 'a mat of the build-up’s weight',
+      };
+    case 'base-resin':
+    case 'bandage-resin':
+      return { kind: 'base-resin', fit: () => 0, need: 'a base resin' };
+    case 'topcoat':
+      return {
+        kind: 'topcoat',
+        fit: (m, _l, c) =>
+          c.topcoatColour === null ? 0 : (m.topcoatColour ?? '').trim().toLowerCase() === c.topcoatColour.trim().toLowerCase() ? 0 : null,
+        need: 'a topcoat of the job’s colour',
+      };
+    case 'catalyst':
+      return { kind: 'catalyst', fit: () => 0, need: 'a catalyst' };
+    case 'trim:drip':
+    case 'trim:kerb':
+    case 'trim:wall':
+    case 'trim:angle': {
+      const edge = role.slice(5);
+      return {
+        kind: 'trim',
+        fit: (m, _l, c) => (m.trimKind === edge ? (sameNumber(m.trimLengthM, c.trimLengthM) ? 0 : 1) : null),
+        need: `a ${edge} trim`,
+      };
+    }
+    case 'corner:external':
+    case 'corner:internal': {
+      const which = role === 'corner:external' ? 'external' : 'internal';
+      return {
+        kind: 'trim',
+        fit: (m) => (isCorner(m, which) ? 0 : null),
+        need: `an ${which} corner piece (a trim with no trim kind and “${which} corner” in its name)`,
+      };
+    }
+    case 'outlet':
+      return { kind: 'outlet', fit: () => 0, need: 'an outlet piece' };
+    case 'bandage':
+      return {
+        kind: 'bandage',
+        fit: (m, _l, c) => (sameNumber(m.rollWidthM, new Decimal(c.bandageWidthMm).div(1000)) ? 0 : 1),
+        need: 'a bandage',
+      };
+    case 'acetone':
+      return { kind: 'acetone', fit: () => 0, need: 'acetone' };
+    case 'adhesive':
+      return { kind: 'adhesive', fit: () => 0, need: 'a trim adhesive' };
+    case 'battens':
+      return { kind: 'batten', fit: () => 0, need: 'a batten' };
+    case 'nails':
+      return { kind: 'fixing', fit: () => 0, need: 'a fixing (clout nails)' };
+    default: {
+      const never: never = role;
+      throw new Error(`unknown line role ${String(never)}`);
+    }
+  }
+}
+
+@Injectable()
+export class CostingService {
+  constructor(@InjectRepository(Material) private readonly materials: Repository<Material>) {}
+
+  private async catalogue(companyId: string, kinds: MaterialKind[], m?: EntityManager): Promise<Material[]> {
+    const repo = m ? m.getRepository(Material) : this.materials;
+    return repo.find({ where: { companyId, active: true, kind: In(kinds) }, order: { code: 'ASC' } });
+  }
+
+  /** The material of each role: the caller's choice when given (it must be of the role's kind), else the best fit. */
+  async matchMaterials(
+    companyId: string,
+    lines: readonly TakeoffLine[],
+    ctx: MatchContext,
+    chosen: ReadonlyMap<LineRole, string> = new Map(),
+    m?: EntityManager,
+  ): Promise<{ materials: Map<LineRole, Material | null>; problems: Map<LineRole, string> }> {
+    const specs = new Map(lines.map((l) => [l.role, fitFor(l.role)]));
+    const all = await this.catalogue(companyId, [...new Set([...specs.values()].map((s) => s.kind))], m);
+    const materials = new Map<LineRole, Material | null>();
+    const problems = new Map<LineRole, string>();
+    for (const line of lines) {
+      const spec = specs.get(line.role)!;
+      const choice = chosen.get(line.role);
+      if (choice !== undefined) {
+        const found = all.find((x) => x.id === choice && x.kind === spec.kind);
+        if (found) {
+          materials.set(line.role, found);
+          continue;
+        }
+        problems.set(line.role, `The material chosen for ${line.role} is not an active ${spec.kind} of this company; the best fit was used.`);
+      }
+      let best: Material | null = null;
+      let bestFit = Number.POSITIVE_INFINITY;
+      for (const x of all) {
+        if (x.kind !== spec.kind) {
+          continue;
+        }
+        const f = spec.fit(x, line, ctx);
+        if (f !== null && f < bestFit) {
+          best = x;
+          bestFit = f;
+        }
+      }
+      materials.set(line.role, best);
+      if (!best) {
+        problems.set(line.role, `No material in the catalogue for ${line.description.toLowerCase()}: add ${spec.need}.`);
+      }
+    }
+    return { materials, problems };
+  }
+
+  /**
+   * The cheapest current price of each pack size of each material on a date: for every supplier
+   * its latest price valid on the date (the price history's rule), then the cheapest supplier.
+   */
+  async currentPrices(companyId: string, materialIds: string[], onDate: string, m?: EntityManager): Promise<Map<string, PackPrice>> {
+    const out = new Map<string, PackPrice>();
+    if (materialIds.length === 0) {
+      return out;
+    }
+    const runner = m ?? this.materials.manager;
+    const rows: { material_id: string; pack_size: string; pack_price: string; supplier_id: string; supplier_name: string; lead_time_days: number }[] =
+      await runner.query(
+        `SELECT * FROM (
+           SELECT DISTINCT ON (p.material_id, p.pack_size, p.supplier_id)
+                  p.material_id, p.pack_size::text, p.pack_price::text, p.supplier_id, s.name AS supplier_name, s.lead_time_days
+             FROM supplier_prices p JOIN suppliers s ON s.id = p.supplier_id AND s.active
+            WHERE p.company_id = $1 AND p.material_id = ANY($2) AND p.valid_from <= $3
+            ORDER BY p.material_id, p.pack_size, p.supplier_id, p.valid_from DESC, p.created_at DESC
+         ) cur ORDER BY material_id, pack_size, pack_price, lead_time_days, supplier_name`,
+        [companyId, materialIds, onDate],
+      );
+    for (const r of rows) {
+      const key = priceKey(r.material_id, r.pack_size);
+      if (!out.has(key)) {
+        out.set(key, { packPrice: r.pack_price, supplierId: r.supplier_id, supplierName: r.supplier_name, leadTimeDays: r.lead_time_days });
+      }
+    }
+    return out;
+  }
+
+  /**
+   * A take-off costed against the catalogue: each line mapped to a material, lines of the same
+   * material summed in its stock unit (deck and bandage resin together), packs by choosePacks over
+   * the material's pack sizes, each pack at the cheapest current price, then priceEstimate with
+   * labour, markup and VAT. Materials with no price are left out of the material cost and counted.
+   */
+  async costTakeoff(
+    companyId: string,
+    takeoff: Takeoff,
+    ctx: MatchContext,
+    money: { labourRate: string; markupPct: string; vatRatePct: string },
+    onDate: string,
+    chosen?: ReadonlyMap<LineRole, string>,
+    m?: EntityManager,
+  ): Promise<CostedTakeoff> {
+    const { materials: lineMaterials, problems } = await this.matchMaterials(companyId, takeoff.lines, ctx, chosen, m);
+    const groups: CostedMaterial[] = [];
+    const byMaterial = new Map<string, CostedMaterial>();
+    for (const line of takeoff.lines) {
+      const material = lineMaterials.get(line.role) ?? null;
+      if (!material) {
+        groups.push(blank(line, null, line.quantity, line.unit, problems.get(line.role) ?? null));
+        continue;
+      }
+      const converted = toStockUnit(line.quantity, line.unit, material, ctx);
+      if (!converted.ok) {
+        groups.push(blank(line, material, line.quantity, line.unit, converted.problem));
+        continue;
+      }
+      const group = byMaterial.get(material.id);
+      if (group) {
+        group.roles.push(line.role);
+        group.quantity = group.quantity.plus(converted.quantity);
+      } else {
+        const g = blank(line, material, converted.quantity, material.stockUnit, problems.get(line.role) ?? null);
+        byMaterial.set(material.id, g);
+        groups.push(g);
+      }
+    }
+    const prices = await this.currentPrices(companyId, [...byMaterial.keys()], onDate, m);
+    for (const g of byMaterial.values()) {
+      const material = g.material as Material;
+      const sizes = material.packSizes.map((p) => p.size);
+      if (sizes.length === 0) {
+        g.problem = `${material.name} has no pack sizes in the catalogue: add the packs it is bought in.`;
+        continue;
+      }
+      const choice = choosePacks(g.quantity, sizes);
+      g.packTotal = choice.total;
+      g.leftover = choice.leftover;
+      g.packs = choice.packs.map((p) => {
+        const price = prices.get(priceKey(material.id, p.size.toString())) ?? null;
+        const label = material.packSizes.find((s) => new Decimal(s.size).eq(p.size))?.label ?? `${p.size.toString()} ${material.stockUnit}`;
+        return { size: p.size, label, count: p.count, price, cost: price ? roundMoney(new Decimal(price.packPrice).times(p.count)) : null };
+      });
+      const missing = g.packs.filter((p) => p.price === null);
+      if (missing.length > 0) {
+        g.problem = `No price: no current supplier price for ${missing.map((p) => p.label).join(', ')} of ${material.name}. Add one to the supplier’s price list.`;
+      } else {
+        g.cost = g.packs.reduce((s, p) => s.plus(p.cost as Decimal), new Decimal(0));
+      }
+    }
+    const priced = groups.filter((g) => g.cost !== null);
+    const price = priceEstimate(
+      priced.flatMap((g) => g.packs.map((p) => ({ quantity: p.count, unitCost: (p.price as PackPrice).packPrice }))),
+      takeoff.labour.totalHours,
+      money.labourRate,
+      money.markupPct,
+      money.vatRatePct,
+    );
+    return { lineMaterials, materials: groups, price, unpriced: groups.length - priced.length };
+  }
+}
+
+function blank(line: TakeoffLine, material: Material | null, quantity: Decimal, unit: Unit | string, problem: string | null): CostedMaterial {
+  return {
+    roles: [line.role],
+    materialKind: line.material,
+    material,
+    quantity,
+    unit,
+    packs: [],
+    packTotal: null,
+    leftover: null,
+    cost: null,
+    problem,
+  };
+}
+
+/** Pack sizes compare as numbers: "25" and "25.000" are one size. */
+export function priceKey(materialId: string, packSize: string): string {
+  return `${materialId}|${new Decimal(packSize).toString()}`;
+}

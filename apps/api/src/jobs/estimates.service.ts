@@ -1,0 +1,404 @@
+import { HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import {
+  catalystPercent,
+  cautionsFor,
+  checkLayingConditions,
+  Decimal,
+  DomainError,
+  Estimate as Takeoff,
+  estimateRoof,
+  LineRole,
+  workingTimeHint,
+} from '@potlife/domain';
+import { DataSource, EntityManager, In } from 'typeorm';
+import { BuildUpsService, toDomainBuildUp } from '../build-ups/build-ups.service';
+import type { AuthUser } from '../common/current-user';
+import { RuleViolation } from '../common/http-exception.filter';
+import { CostingService } from '../costing/costing.service';
+import {
+  CreateEstimateDto,
+  EstimateMaterialResponse,
+  EstimateResponse,
+  EstimateSummaryResponse,
+  LayingCheckDto,
+  LayingCheckResponse,
+} from './dto/estimate.dto';
+import { Estimate } from './entities/estimate.entity';
+import { EstimateLine } from './entities/estimate-line.entity';
+import { EstimateMaterial } from './entities/estimate-material.entity';
+import { EstimatePack } from './entities/estimate-pack.entity';
+import { Job } from './entities/job.entity';
+import { JobsService } from './jobs.service';
+import { toDomainRoof } from './roof/roof';
+
+/** numeric columns come back padded ("25.000"); the API gives them plainly ("25"). */
+export const plain = (v: string): string => new Decimal(v).toString();
+const plainOrNull = (v: string | null): string | null => (v === null ? null : plain(v));
+
+/** Today as YYYY-MM-DD in the server's zone. */
+export const today = (): string => {
+  const d = new Date();
+  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+};
+
+/** A job's estimates can change until the crew starts. */
+const ESTIMATING: readonly string[] = ['enquiry', 'quoted', 'won', 'scheduled'];
+
+export interface EstimateBundle {
+  estimate: Estimate;
+  lines: EstimateLine[];
+  materials: (EstimateMaterial & { packs: EstimatePack[] })[];
+  names: Map<string, string>;
+  accepted: boolean;
+}
+
+@Injectable()
+export class EstimatesService {
+  constructor(
+    @InjectDataSource() private readonly db: DataSource,
+    private readonly jobs: JobsService,
+    private readonly buildUps: BuildUpsService,
+    private readonly costing: CostingService,
+  ) {}
+
+  /**
+   * A new estimate version: estimateRoof(roof, build-up) from the domain, its lines mapped to
+   * catalogue materials, packed with choosePacks and priced with priceEstimate (CostingService).
+   */
+  async create(user: AuthUser, jobId: string, dto: CreateEstimateDto): Promise<EstimateResponse> {
+    const id = await this.db.transaction(async (m) => {
+      const job = await this.jobs.find(user.companyId, jobId, m, true);
+      if (!ESTIMATING.includes(job.status)) {
+        throw new RuleViolation(`A ${job.status} job cannot be estimated again`, 'job_closed');
+      }
+      if (!job.roof) {
+        throw new RuleViolation('Measure the roof first: PUT /api/jobs/{id}/roof', 'no_roof');
+      }
+      const buildUpId = dto.buildUpId ?? job.buildUpId;
+      if (!buildUpId) {
+        throw new RuleViolation('Choose a build-up for the job (or give buildUpId) before estimating', 'no_build_up');
+      }
+      const buildUp = await this.buildUps.find(user.companyId, buildUpId, m);
+      const airC = dto.airC ?? '20';
+      let takeoff: Takeoff;
+      try {
+        takeoff = estimateRoof(toDomainRoof(job.roof, airC), toDomainBuildUp(buildUp.rates));
+      } catch (e) {
+        if (e instanceof DomainError) {
+          throw new RuleViolation(e.message, e.code === 'too-cold' ? 'too_cold' : 'invalid_roof', HttpStatus.UNPROCESSABLE_ENTITY);
+        }
+        throw e;
+      }
+      const pricedOn = today();
+      const chosen = new Map<LineRole, string>((dto.materials ?? []).map((c) => [c.role, c.materialId]));
+      const costed = await this.costing.costTakeoff(
+        user.companyId,
+        takeoff,
+        {
+          matGsm: buildUp.rates.matGsm,
+          rollWidthM: buildUp.rates.rollWidthM,
+          bandageWidthMm: buildUp.rates.bandageWidthMm,
+          bandageGsm: buildUp.rates.bandageGsm,
+          trimLengthM: buildUp.rates.trimLengthM,
+          topcoatColour: job.topcoatColour,
+        },
+        { labourRate: buildUp.labourRate, markupPct: buildUp.markupPct, vatRatePct: buildUp.vatRatePct },
+        pricedOn,
+        chosen,
+        m,
+      );
+      const [{ next }] = (await m.query(`SELECT coalesce(max(version), 0) + 1 AS next FROM estimates WHERE job_id = $1`, [job.id])) as [
+        { next: number },
+      ];
+      const p = costed.price;
+      const estimate = await m.getRepository(Estimate).save(
+        m.getRepository(Estimate).create({
+          companyId: user.companyId,
+          jobId: job.id,
+          version: next,
+          buildUpId: buildUp.id,
+          buildUpName: buildUp.name,
+          buildUp: { rates: buildUp.rates, labourRate: buildUp.labourRate, markupPct: buildUp.markupPct, vatRatePct: buildUp.vatRatePct },
+          roof: job.roof,
+          pricedOn,
+          airC: takeoff.airC.toString(),
+          catalystPct: takeoff.catalystPercent.toString(),
+          deckAreaM2: takeoff.deckAreaM2.toString(),
+          upstandAreaM2: takeoff.upstandAreaM2.toString(),
+          laminatedAreaM2: takeoff.laminatedAreaM2.toString(),
+          trimM: takeoff.trimM.toString(),
+          cornersExternal: takeoff.corners.external,
+          cornersInternal: takeoff.corners.internal,
+          cornersDerived: takeoff.corners.derived,
+          pipes: takeoff.pipes,
+          outlets: takeoff.outlets,
+          laminatingHours: takeoff.labour.laminatingHours.toString(),
+          trimHours: takeoff.labour.trimHours.toString(),
+          labourHours: takeoff.labour.totalHours.toString(),
+          labourRate: buildUp.labourRate,
+          materialCost: p.materialCost.toString(),
+          labourCost: p.labourCost.toString(),
+          markupPct: buildUp.markupPct,
+          markup: p.markup.toString(),
+          net: p.net.toString(),
+          vatRatePct: buildUp.vatRatePct,
+          vat: p.vat.toString(),
+          gross: p.gross.toString(),
+          unpriced: costed.unpriced,
+          cautions: takeoff.cautions,
+          note: dto.note ?? null,
+          createdBy: user.id,
+          acceptedAt: null,
+          acceptedBy: null,
+        }),
+      );
+      await m.getRepository(EstimateLine).insert(
+        takeoff.lines.map((l, i) => ({
+          companyId: user.companyId,
+          estimateId: estimate.id,
+          position: i + 1,
+          role: l.role,
+          materialKind: l.material,
+          description: l.description,
+          unit: l.unit,
+          quantity: l.quantity.toString(),
+          lengths: l.lengths ?? null,
+          metres: l.metres ? l.metres.toString() : null,
+          materialId: costed.lineMaterials.get(l.role)?.id ?? null,
+        })),
+      );
+      for (const [i, g] of costed.materials.entries()) {
+        const row = await m.getRepository(EstimateMaterial).save({
+          companyId: user.companyId,
+          estimateId: estimate.id,
+          position: i + 1,
+          roles: g.roles,
+          materialKind: g.materialKind,
+          materialId: g.material?.id ?? null,
+          materialName: g.material?.name ?? null,
+          stockUnit: g.unit,
+          quantity: g.quantity.toString(),
+          packTotal: g.packTotal ? g.packTotal.toString() : null,
+          leftover: g.leftover ? g.leftover.toString() : null,
+          cost: g.cost ? g.cost.toString() : null,
+          problem: g.problem,
+        });
+        if (g.packs.length > 0) {
+          await m.getRepository(EstimatePack).insert(
+            g.packs.map((pk) => ({
+              companyId: user.companyId,
+              estimateMaterialId: row.id,
+              packSize: pk.size.toString(),
+              label: pk.label,
+              count: pk.count,
+              packPrice: pk.price?.packPrice ?? null,
+              supplierId: pk.price?.supplierId ?? null,
+              supplierName: pk.price?.supplierName ?? null,
+              leadTimeDays: pk.price?.leadTimeDays ?? null,
+              cost: pk.cost ? pk.cost.toString() : null,
+            })),
+          );
+        }
+      }
+      return estimate.id;
+    });
+    return this.respond(await this.bundle(user.companyId, id));
+  }
+
+  async list(user: AuthUser, jobId: string): Promise<EstimateSummaryResponse[]> {
+    const job = await this.jobs.find(user.companyId, jobId);
+    const rows: (Estimate & { creator: string | null })[] = (
+      await this.db.getRepository(Estimate).find({ where: { jobId: job.id, companyId: user.companyId }, order: { version: 'DESC' } })
+    ).map((e) => Object.assign(e, { creator: null as string | null }));
+    const creators = [...new Set(rows.map((e) => e.createdBy).filter((x): x is string => !!x))];
+    if (creators.length) {
+      const users: { id: string; name: string }[] = await this.db.query(`SELECT id, name FROM users WHERE id = ANY($1)`, [creators]);
+      rows.forEach((e) => (e.creator = users.find((u) => u.id === e.createdBy)?.name ?? null));
+    }
+    return rows.map((e) => ({
+      id: e.id,
+      version: e.version,
+      accepted: job.acceptedEstimateId === e.id,
+      createdAt: e.createdAt.toISOString(),
+      createdBy: e.createdBy ? { id: e.createdBy, name: e.creator ?? '' } : null,
+      buildUpName: e.buildUpName,
+      laminatedAreaM2: plain(e.laminatedAreaM2),
+      net: plain(e.net),
+      gross: plain(e.gross),
+      unpriced: e.unpriced,
+    }));
+  }
+
+  /** An estimate with its lines, materials and packs; 404 when the job or version is not the company's. */
+  async bundle(companyId: string, estimateId: string, m: EntityManager = this.db.manager): Promise<EstimateBundle> {
+    const estimate = await m.getRepository(Estimate).findOneBy({ id: estimateId, companyId });
+    if (!estimate) {
+      throw new NotFoundException('Estimate not found');
+    }
+    const [lines, materials, job] = await Promise.all([
+      m.getRepository(EstimateLine).find({ where: { estimateId }, order: { position: 'ASC' } }),
+      m.getRepository(EstimateMaterial).find({ where: { estimateId }, order: { position: 'ASC' } }),
+      m.getRepository(Job).findOneByOrFail({ id: estimate.jobId }),
+    ]);
+    const packs = materials.length
+      ? await m.getRepository(EstimatePack).find({ where: { estimateMaterialId: In(materials.map((x) => x.id)) }, order: { packSize: 'DESC' } })
+      : [];
+    const ids = [...new Set([...lines.map((l) => l.materialId), estimate.createdBy].filter((x): x is string => !!x))];
+    const names = new Map<string, string>();
+    if (ids.length) {
+      const rows: { id: string; name: string }[] = await m.query(
+        `SELECT id, name FROM materials WHERE id = ANY($1) UNION ALL SELECT id, name FROM users WHERE id = ANY($1)`,
+        [ids],
+      );
+      rows.forEach((r) => names.set(r.id, r.name));
+    }
+    return {
+      estimate,
+      lines,
+      materials: materials.map((x) => Object.assign(x, { packs: packs.filter((p) => p.estimateMaterialId === x.id) })),
+      names,
+      accepted: job.acceptedEstimateId === estimate.id,
+    };
+  }
+
+  async findVersion(companyId: string, jobId: string, version: number, m: EntityManager = this.db.manager): Promise<Estimate> {
+    const e = await m.getRepository(Estimate).findOneBy({ companyId, jobId, version });
+    if (!e) {
+      throw new NotFoundException(`Estimate version ${version} not found for this job`);
+    }
+    return e;
+  }
+
+  async get(user: AuthUser, jobId: string, version: number): Promise<EstimateResponse> {
+    const job = await this.jobs.find(user.companyId, jobId);
+    const e = await this.findVersion(user.companyId, job.id, version);
+    return this.respond(await this.bundle(user.companyId, e.id));
+  }
+
+  /**
+   * Makes a version the job's accepted estimate: the price of the quote and the basis for
+   * reservations and the reconciliation. Refused while stock is reserved against another version.
+   */
+  async accept(user: AuthUser, jobId: string, version: number, beforeAccept?: (m: EntityManager, job: Job, e: Estimate) => Promise<void>): Promise<EstimateResponse> {
+    const id = await this.db.transaction(async (m) => {
+      const job = await this.jobs.find(user.companyId, jobId, m, true);
+      if (!ESTIMATING.includes(job.status)) {
+        throw new RuleViolation(`The estimate of a ${job.status} job can no longer change`, 'job_closed');
+      }
+      const e = await this.findVersion(user.companyId, job.id, version, m);
+      if (beforeAccept) {
+        await beforeAccept(m, job, e);
+      }
+      job.acceptedEstimateId = e.id;
+      await m.getRepository(Job).save(job);
+      e.acceptedAt = new Date();
+      e.acceptedBy = user.id;
+      await m.getRepository(Estimate).save(e);
+      return e.id;
+    });
+    return this.respond(await this.bundle(user.companyId, id));
+  }
+
+  respond(b: EstimateBundle): EstimateResponse {
+    const e = b.estimate;
+    const materials: EstimateMaterialResponse[] = b.materials.map((x) => ({
+      position: x.position,
+      roles: x.roles,
+      materialKind: x.materialKind,
+      material: x.materialId ? { id: x.materialId, name: x.materialName ?? '' } : null,
+      unit: x.stockUnit ?? '',
+      quantity: plain(x.quantity),
+      packs: x.packs.map((p) => ({
+        size: plain(p.packSize),
+        label: p.label,
+        count: p.count,
+        packPrice: p.packPrice === null ? null : new Decimal(p.packPrice).toFixed(2),
+        supplier: p.supplierId ? { id: p.supplierId, name: p.supplierName ?? '', leadTimeDays: p.leadTimeDays ?? 0 } : null,
+        cost: p.cost === null ? null : new Decimal(p.cost).toFixed(2),
+      })),
+      packTotal: plainOrNull(x.packTotal),
+      leftover: plainOrNull(x.leftover),
+      cost: x.cost === null ? null : new Decimal(x.cost).toFixed(2),
+      priced: x.cost !== null,
+      problem: x.problem,
+    }));
+    const money = (v: string) => new Decimal(v).toFixed(2);
+    return {
+      id: e.id,
+      jobId: e.jobId,
+      version: e.version,
+      accepted: b.accepted,
+      acceptedAt: e.acceptedAt ? e.acceptedAt.toISOString() : null,
+      createdAt: e.createdAt.toISOString(),
+      createdBy: e.createdBy ? { id: e.createdBy, name: b.names.get(e.createdBy) ?? '' } : null,
+      note: e.note,
+      buildUp: { id: e.buildUpId, name: e.buildUpName, labourRate: money(e.labourRate), markupPct: plain(e.markupPct), vatRatePct: plain(e.vatRatePct) },
+      pricedOn: e.pricedOn,
+      airC: plain(e.airC),
+      catalystPercent: plain(e.catalystPct),
+      deckAreaM2: plain(e.deckAreaM2),
+      upstandAreaM2: plain(e.upstandAreaM2),
+      laminatedAreaM2: plain(e.laminatedAreaM2),
+      trimM: plain(e.trimM),
+      corners: { external: e.cornersExternal, internal: e.cornersInternal, derived: e.cornersDerived },
+      pipes: e.pipes,
+      outlets: e.outlets,
+      lines: b.lines.map((l) => ({
+        position: l.position,
+        role: l.role,
+        materialKind: l.materialKind,
+        description: l.description,
+        unit: l.unit,
+        quantity: plain(l.quantity),
+        lengths: l.lengths,
+        metres: plainOrNull(l.metres),
+        material: l.materialId ? { id: l.materialId, name: b.names.get(l.materialId) ?? '' } : null,
+      })),
+      materials,
+      labour: {
+        laminatingHours: plain(e.laminatingHours),
+        trimHours: plain(e.trimHours),
+        totalHours: plain(e.labourHours),
+        rate: money(e.labourRate),
+        cost: money(e.labourCost),
+      },
+      price: {
+        materialCost: money(e.materialCost),
+        labourCost: money(e.labourCost),
+        markupPct: plain(e.markupPct),
+        markup: money(e.markup),
+        net: money(e.net),
+        vatRatePct: plain(e.vatRatePct),
+        vat: money(e.vat),
+        gross: money(e.gross),
+      },
+      unpriced: e.unpriced,
+      problems: materials.map((x) => x.problem).filter((x): x is string => x !== null),
+      cautions: e.cautions,
+    };
+  }
+
+  /** The laying check of the domain: fit to lay, the catalyst dose and a working-time hint. */
+  layingCheck(dto: LayingCheckDto): LayingCheckResponse {
+    const check = checkLayingConditions(dto);
+    let dose: string | null = null;
+    let hint: LayingCheckResponse['workingTime'] = null;
+    try {
+      dose = catalystPercent(dto.airC).toString();
+      hint = workingTimeHint(dto.airC);
+    } catch (e) {
+      if (!(e instanceof DomainError && e.code === 'too-cold')) {
+        throw e;
+      }
+    }
+    return {
+      ok: check.ok,
+      problems: check.problems,
+      dewPointC: check.dewPointC.toDecimalPlaces(1).toString(),
+      catalystPercent: dose,
+      workingTime: hint,
+      cautions: cautionsFor(['base-resin', 'topcoat', 'catalyst', 'acetone']),
+    };
+  }
+}
