@@ -18,9 +18,12 @@ TURBO_TELEMETRY_DISABLED=1 npx turbo run build --filter=@potlife/api... --output
 node apps/api/dist/database/migrate.js
 node apps/api/dist/database/seed.js
 spawn "SMTP fake" node apps/api/dist/mail/smtp-fake.js
-spawn "domain (watch)" npx -w @potlife/domain tsc -p tsconfig.build.json --watch --preserveWatchOutput
-spawn "API build (watch)" npx -w @potlife/api tsc -p tsconfig.build.json --watch --preserveWatchOutput
+# Binaries are started directly (not through npx or npm) so that the PID we keep is the process
+# itself and Ctrl-C stops it.
+BIN="$ROOT/node_modules/.bin"
+spawn "domain (watch)" "$BIN/tsc" -p packages/domain/tsconfig.build.json --watch --preserveWatchOutput
+spawn "API build (watch)" "$BIN/tsc" -p apps/api/tsconfig.build.json --watch --preserveWatchOutput
 spawn "API" node --watch-path=apps/api/dist --watch-path=packages/domain/dist apps/api/dist/main.js
-API_PORT=$PORT spawn "web (vite)" npm run dev -w @potlife/web -- --host 127.0.0.1 --port 5173
+API_PORT=$PORT spawn "web (vite)" bash -c "cd apps/web && exec '$BIN/vite' --host 127.0.0.1 --port 5173"
 log "web: http://127.0.0.1:5173  (API on $PORT)"
 wait -n "${STARTED_PIDS[@]}" || true
