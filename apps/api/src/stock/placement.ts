@@ -228,12 +228,12 @@ export function findSegregationProblems(present: readonly Present[], nodes: Read
     for (const c of classes) {
       const seg = checkSegregation(c, classes.filter((x) => x !== c));
       if (!seg.ok) {
-        const involved = [c, ...seg.conflictsWith];
+        const involved = [c, ...seg.conflictsWith].sort();
         problems.push({
           locationId: root.id,
           locationName: root.name,
           classes: involved,
-          materials: [...new Set(items.filter((p) => segregationClasses(p.material).some((x) => involved.includes(x))).map((p) => p.material.name))],
+          materials: [...new Set(items.filter((p) => segregationClasses(p.material).some((x) => involved.includes(x))).map((p) => p.material.name))].sort(),
           message: `${root.name}: ${seg.message}`,
         });
         break;
