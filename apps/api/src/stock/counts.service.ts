@@ -273,12 +273,13 @@ export class CountsService {
       ((await m.query(`SELECT location_id AS id FROM stock_count_locations WHERE count_id = $1`, [countId])) as { id: string }[]).map((r) => r.id),
     );
     for (const [i, e] of entries.entries()) {
-      const updated: unknown[] = await m.query(
-        `UPDATE stock_count_lines SET counted_quantity = $4, counted_by = $5, counted_at = now()
-          WHERE count_id = $1 AND lot_id = $2 AND location_id = $3 RETURNING id`,
-        [countId, e.lotId, e.locationId, e.countedQuantity, user.id],
-      );
-      if (updated.length > 0) {
+      const [line] = (await m.query(`SELECT id FROM stock_count_lines WHERE count_id = $1 AND lot_id = $2 AND location_id = $3`, [
+        countId,
+        e.lotId,
+        e.locationId,
+      ])) as { id: string }[];
+      if (line) {
+        await m.query(`UPDATE stock_count_lines SET counted_quantity = $2, counted_by = $3, counted_at = now() WHERE id = $1`, [line.id, e.countedQuantity, user.id]);
         continue;
       }
       // A lot found on the shelf that the ledger did not put there when the count opened.

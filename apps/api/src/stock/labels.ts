@@ -75,18 +75,21 @@ export async function renderLabels(labels: readonly LabelData[]): Promise<Buffer
     doc.on('end', () => resolve(Buffer.concat(chunks)));
     doc.on('error', reject);
   });
-  const qrCache = new Map<string, Buffer>();
+  // Each QR code is decoded and embedded once per document, then drawn on every label of its lot
+  // (pdfkit's openImage; its type definitions leave it out).
+  const images = doc as unknown as { openImage(src: Buffer): object };
+  const qrCache = new Map<string, object>();
   const [w, h] = LABEL_SIZE;
   const pad = 4 * MM;
   const qrSize = 30 * MM;
   for (const label of labels) {
     let qr = qrCache.get(label.url);
     if (!qr) {
-      qr = await QRCode.toBuffer(label.url, { type: 'png', errorCorrectionLevel: 'M', margin: 1, width: 360 });
+      qr = images.openImage(await QRCode.toBuffer(label.url, { type: 'png', errorCorrectionLevel: 'M', margin: 1, width: 240 }));
       qrCache.set(label.url, qr);
     }
     doc.addPage({ size: LABEL_SIZE, margin: 0 });
-    doc.image(qr, w - pad - qrSize, pad, { width: qrSize, height: qrSize });
+    doc.image(qr as Buffer, w - pad - qrSize, pad, { width: qrSize, height: qrSize });
     const textW = w - 3 * pad - qrSize;
     let y = pad;
     doc.font('bold').fontSize(12).fillColor('black').text(label.materialName, pad, y, { width: textW, height: 30, ellipsis: true });

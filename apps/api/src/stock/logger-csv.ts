@@ -82,7 +82,11 @@ export function parseTemperature(raw: string, commaDecimal: boolean): string | n
  * the good rows are returned. Throws CsvShapeError when the file has not the right columns.
  */
 export function parseLoggerCsv(csv: string, now: Date = new Date()): ParsedCsv {
-  const parsed = Papa.parse<string[]>(csv.replace(/^\uFEFF/, ''), { skipEmptyLines: false });
+  const text = csv.replace(/^\uFEFF/, '');
+  // The delimiter is the one the header row uses (a comma can also be a decimal point in the rows).
+  const head = text.split(/\r?\n/, 1)[0] ?? '';
+  const delimiter = [',', ';', '\t', '|'].find((d) => head.includes(d)) ?? ',';
+  const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false, delimiter });
   const data = parsed.data;
   const header = (data[0] ?? []).map(norm);
   const ti = header.findIndex((h) => TIME_HEADERS.includes(h));
@@ -92,7 +96,7 @@ export function parseLoggerCsv(csv: string, now: Date = new Date()): ParsedCsv {
       `the first line must name a timestamp column and a temperature column (e.g. "timestamp,temperature"); found: ${header.filter(Boolean).join(', ') || 'nothing'}`,
     );
   }
-  const commaDecimal = parsed.meta.delimiter !== ',';
+  const commaDecimal = delimiter !== ',';
   const body = data.slice(1);
   if (body.length > MAX_ROWS) {
     throw new CsvShapeError(`the file has ${body.length} rows; import at most ${MAX_ROWS} at a time`);
