@@ -1,5 +1,9 @@
 import { Client } from 'pg';
+import { DataSource } from 'typeorm';
 import { CatalogueService } from '../src/catalogue/catalogue.service';
+import { dataSourceOptions } from '../src/database/data-source';
+import { DEMO_MATERIALS, DEMO_SUPPLIERS, seedCatalogue } from '../src/database/seeds/catalogue';
+import { DEMO_PASSWORD, DEMO_USERS, seedDemoCompany } from '../src/database/seeds/demo-company';
 import { addUser, auth, createTestApp, registerCompany, Session, TestApp } from './app';
 
 /** A base resin body; figures are common trade practice, no source (TRADE.md [practice]). */
@@ -414,6 +418,53 @@ describe('catalogue', () => {
       // Potlife's own target for a shared 2-core test machine.
       expect(previewMs).toBeLessThan(5000);
       expect(commitMs).toBeLessThan(5000);
+    });
+  });
+
+  describe('demo seed', () => {
+    it('creates the catalogue, two suppliers and their prices once; a second run changes nothing', async () => {
+      const ds = new DataSource(dataSourceOptions(t.databaseUrl));
+      await ds.initialize();
+      const counts = async () =>
+        (
+          await db.query(
+            `SELECT (SELECT count(*) FROM materials)::int AS materials, (SELECT count(*) FROM suppliers)::int AS suppliers,
+                    (SELECT count(*) FROM supplier_contacts)::int AS contacts, (SELECT count(*) FROM supplier_prices)::int AS prices`,
+          )
+        ).rows[0];
+      try {
+        const before = await counts();
+        const run = () => ds.transaction(async (m) => seedCatalogue(m, await seedDemoCompany(m)));
+        await run();
+        const once = await counts();
+        expect(once.materials - before.materials).toBe(DEMO_MATERIALS.length);
+        expect(once.suppliers - before.suppliers).toBe(2);
+        expect(once.contacts - before.contacts).toBe(4);
+        expect(once.prices - before.prices).toBe(DEMO_SUPPLIERS.reduce((n, s) => n + s.prices.length, 0));
+        await run();
+        expect(await counts()).toEqual(once);
+      } finally {
+        await ds.destroy();
+      }
+      const login = await t.http().post('/api/auth/login').send({ email: DEMO_USERS[0]!.email, password: DEMO_PASSWORD }).expect(200);
+      const demo = { token: login.body.accessToken as string, user: login.body.user } as Session;
+      const codes = (await t.http().get('/api/materials?pageSize=200').set(auth(demo)).expect(200)).body.items.map((m: { code: string }) => m.code);
+      expect(codes).toEqual(expect.arrayContaining(['RES-GP', 'TOP-GRY', 'TOP-CHR', 'TOP-GRN', 'CAT-MEKP', 'MAT-450', 'BND-100', 'ACE', 'TRM-DRIP', 'CRN-EXT', 'OUT-110']));
+      const resinId = (await t.http().get('/api/materials?q=RES-GP').set(auth(demo)).expect(200)).body.items[0].id;
+      const prices = await t.http().get(`/api/materials/${resinId}/prices?on=2025-10-01&history=true`).set(auth(demo)).expect(200);
+      const drum25 = prices.body.packs.find((p: { packSize: string }) => p.packSize === '25');
+      // Orchard Lane's £84.50 is cheaper than Brackenfield's £86.40 after the 1 September 2025 rise (demo figures).
+      expect(drum25.prices.map((p: { supplierName: string; packPrice: string }) => [p.supplierName, p.packPrice])).toEqual([
+        ['Orchard Lane Roofing Supplies', '84.50'],
+        ['Brackenfield Resin Supply', '86.40'],
+      ]);
+      expect(drum25.prices[1].previous).toMatchObject({ packPrice: '82.00', validFrom: '2025-01-06' });
+      const catalyst = (await t.http().get('/api/materials?q=CAT-MEKP').set(auth(demo)).expect(200)).body.items[0];
+      // MEKP hardener: class 5.2, commonly UN3105 — [memory], verify against ADR 2.2.52.4.
+      expect(catalyst).toMatchObject({ hazardClass: '5.2', unNumber: '3105', packingGroup: null, shelfLifeDays: 365 });
+      const acetone = (await t.http().get('/api/materials?q=ACE&kind=acetone').set(auth(demo)).expect(200)).body.items[0];
+      // Acetone UN1090, class 3, PG II, flash point about −20 °C [pub] ILO ICSC 0087.
+      expect(acetone).toMatchObject({ hazardClass: '3', unNumber: '1090', packingGroup: 'II', flashPointC: '-20' });
     });
   });
 });

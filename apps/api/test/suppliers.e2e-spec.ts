@@ -190,7 +190,7 @@ describe('suppliers and prices', () => {
         [{ validFrom: '2025-02-30' }, 'validFrom'],
         [{ validFrom: '06/01/2025' }, 'validFrom'],
       ] as const) {
-        const bad = await addPrice(owner, a, { materialId: res25.id, packSize: '25', packPrice: '82', validFrom: '2025-06-01', ...body }).expect(400);
+        const bad = await addPrice(owner, a, Object.assign({ materialId: res25.id, packSize: '25', packPrice: '82', validFrom: '2025-06-01' }, body)).expect(400);
         expect(bad.body.message).toContain(`${field}:`);
       }
       // Prices for another company's supplier: 404.

@@ -116,9 +116,11 @@ function convert(spec: ColumnSpec, cell: string): { value: unknown } | { error: 
 }
 
 /** Field checks (the same as the request bodies') and the rules between fields, for a whole set of fields. */
+const FIELD_CHECKS = Object.entries(MATERIAL_FIELD_CHECKS) as [MaterialFieldKey, { nullable: boolean; check: FieldCheck }][];
+
 export function checkMaterialFields(fields: MaterialFields): RowError[] {
   const errors: RowError[] = [];
-  for (const [field, spec] of Object.entries(MATERIAL_FIELD_CHECKS) as [MaterialFieldKey, { nullable: boolean; check: FieldCheck }][]) {
+  for (const [field, spec] of FIELD_CHECKS) {
     const v = fields[field];
     if (v === null || v === undefined) {
       if (!spec.nullable) {

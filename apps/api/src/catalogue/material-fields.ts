@@ -72,12 +72,12 @@ export function normaliseFields(f: MaterialFields): MaterialFields {
     ...f,
     code: f.code.trim(),
     name: f.name.trim(),
-    packSizes: f.packSizes.map((p) => ({ size: new Decimal(p.size).toString(), label: p.label.trim() })),
+    packSizes: f.packSizes.map((p) => ({ size: plainDecimal(p.size), label: p.label.trim() })),
     storageMinC: plainDecimal(f.storageMinC),
     storageMaxC: plainDecimal(f.storageMaxC),
     flashPointC: plainDecimal(f.flashPointC),
-    reorderLevel: new Decimal(f.reorderLevel).toString(),
-    reorderQuantity: new Decimal(f.reorderQuantity).toString(),
+    reorderLevel: plainDecimal(f.reorderLevel),
+    reorderQuantity: plainDecimal(f.reorderQuantity),
     rollWidthM: plainDecimal(f.rollWidthM),
     trimLengthM: plainDecimal(f.trimLengthM),
     litresPerKg: plainDecimal(f.litresPerKg),
@@ -178,7 +178,7 @@ export function materialRuleErrors(f: MaterialFields): FieldError[] {
   }
   const seen = new Set<string>();
   for (const p of f.packSizes) {
-    const key = new Decimal(p.size).toString();
+    const key = plainDecimal(p.size);
     if (seen.has(key)) {
       add('packSizes', `the pack size ${key} appears twice`);
     }

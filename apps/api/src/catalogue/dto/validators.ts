@@ -91,9 +91,24 @@ export function IsIsoDate(options?: ValidationOptions) {
   };
 }
 
-/** A decimal string without trailing zeros ("25.000" → "25", "5.0" → "5"); null stays null. */
+const PLAIN_DECIMAL = /^(-?)(\d+)(?:\.(\d+))?$/;
+
+/** A decimal string without trailing (or leading) zeros ("25.000" → "25", "05.0" → "5", "-0.0" → "0"). */
+export function plainDecimal(value: string): string;
+export function plainDecimal(value: string | null): string | null;
 export function plainDecimal(value: string | null): string | null {
-  return value === null ? null : new Decimal(value).toString();
+  if (value === null) {
+    return null;
+  }
+  // String work for the usual case: an import normalises thousands of these.
+  const m = PLAIN_DECIMAL.exec(value.trim());
+  if (!m) {
+    return new Decimal(value).toString();
+  }
+  const int = m[2]!.replace(/^0+(?=\d)/, '');
+  const frac = (m[3] ?? '').replace(/0+$/, '');
+  const plain = frac === '' ? int : `${int}.${frac}`;
+  return m[1] === '-' && /[1-9]/.test(plain) ? `-${plain}` : plain;
 }
 
 /** Money to the penny as a string ("82.5" → "82.50"). */
