@@ -2,6 +2,8 @@ import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { randomUUID } from 'node:crypto';
+import { DataSource } from 'typeorm';
+import { ReceivingService } from '../src/stock/receiving.service';
 import { auth, createTestApp, TestApp } from './app';
 import { insertMaterial, receive, receiptBody, sql, stockWorld, StockWorld } from './stock-fixtures';
 
@@ -131,6 +133,36 @@ describe('receipts', () => {
     it('the estimator reads receipts but cannot post one', async () => {
       await post(receiptBody([{ materialId: w.material.mat, locationId: w.location.bayA, packs: 1, packSize: '30' }]), w.estimator).expect(403);
       await post(receiptBody([{ materialId: w.material.mat, locationId: w.location.bayA, packs: 1, packSize: '30' }]), w.owner).expect(201);
+    });
+  });
+
+  describe('against purchase-order lines (ReceivingService, as purchasing will call it)', () => {
+    it('adds partial deliveries up, refuses over-delivery, and lets only an owner accept it', async () => {
+      const receiving = t.app.get(ReceivingService);
+      const db = t.app.get(DataSource);
+      const orderLine = randomUUID();
+      const orderLines = [{ id: orderLine, materialId: w.material.resin, orderedQuantity: '100' }];
+      const body = (packs: number, allowOverDelivery?: boolean) => {
+        const b = receiptBody([{ materialId: w.material.resin, locationId: w.location.bayA, packs, packSize: '25' }]);
+        (b.lines[0] as Record<string, unknown>).purchaseOrderLineId = orderLine;
+        return { ...b, ...(allowOverDelivery ? { allowOverDelivery } : {}) } as never;
+      };
+      const storeman = { id: w.storeman.user.id, role: 'storeman' as const };
+      const owner = { id: w.owner.user.id, role: 'owner' as const };
+      // ordered 100 kg: 50 now, 50 later (partial deliveries)
+      await db.transaction((m) => receiving.post(m, w.companyId, storeman, body(2), { orderLines }));
+      // 75 more would make 125 of 100
+      await expect(db.transaction((m) => receiving.post(m, w.companyId, storeman, body(3), { orderLines }))).rejects.toThrow(
+        /ordered 100, received before 50, this delivery 75 — 25 kg over the order\. Refuse the extra packs at the door, or an owner can accept/,
+      );
+      await expect(db.transaction((m) => receiving.post(m, w.companyId, storeman, body(3, true), { orderLines }))).rejects.toThrow(/Only an owner can accept an over-delivery/);
+      const ok = await db.transaction((m) => receiving.post(m, w.companyId, owner, body(3, true), { orderLines }));
+      expect(ok.warnings).toEqual(['Test base resin: 25 kg more than ordered, accepted by the owner.']);
+      const got = await t.http().get(`/api/receipts/${ok.receiptId}`).set(auth(w.owner)).expect(200);
+      expect(got.body.lines[0]).toMatchObject({ purchaseOrderLineId: orderLine, overDeliveryAllowed: true, quantity: '75.000' });
+      await expect(
+        db.transaction((m) => receiving.post(m, w.companyId, owner, body(1), { orderLines: [{ ...orderLines[0]!, materialId: w.material.mat }] })),
+      ).rejects.toThrow(/is not the material on that order line/);
     });
   });
 
