@@ -15,6 +15,7 @@ module.exports = {
       rootDir: __dirname,
       testMatch: ['<rootDir>/test/**/*.e2e-spec.ts'],
       globalSetup: '<rootDir>/test/global-setup.ts',
+      globalTeardown: '<rootDir>/test/global-teardown.ts',
     },
   ],
 };

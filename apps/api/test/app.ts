@@ -4,7 +4,7 @@ import { randomBytes } from 'node:crypto';
 import { Client } from 'pg';
 import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
-import { withDb } from './global-setup';
+import { suitePrefix, templateName, withDb } from './global-setup';
 
 export interface TestApp {
   app: INestApplication;
@@ -19,10 +19,11 @@ export interface TestApp {
  */
 export async function createTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const base = process.env.DATABASE_URL ?? 'postgres://potlife@127.0.0.1:54339/potlife';
-  const name = `potlife_t_${randomBytes(5).toString('hex')}`;
+  const run = process.env.POTLIFE_TEST_RUN ?? 'norun';
+  const name = `${suitePrefix(run)}${randomBytes(5).toString('hex')}`;
   const admin = new Client({ connectionString: withDb(base, 'postgres') });
   await admin.connect();
-  await admin.query(`CREATE DATABASE "${name}" TEMPLATE potlife_template`);
+  await admin.query(`CREATE DATABASE "${name}" TEMPLATE ${templateName(run)}`);
   await admin.end();
   const databaseUrl = withDb(base, name);
   Object.assign(process.env, {
