@@ -10,7 +10,8 @@ export function configureApp(app: INestApplication): INestApplication {
   const express = app as NestExpressApplication;
   express.set('trust proxy', 'loopback');
   express.disable('x-powered-by');
-  express.useBodyParser('json', { limit: '2mb' });
+  // 8 MB: a CSV import of some 30,000 catalogue rows travels as JSON.
+  express.useBodyParser('json', { limit: '8mb' });
   app.use(requestId);
   app.setGlobalPrefix('api');
   app.useGlobalPipes(createValidationPipe());
