@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { DomainError } from './errors';
-import { checkJobTransition, JOB_STATUSES, JOB_TRANSITIONS, jobHoldsStock, JobStatus, nextJobStatuses } from './job-status';
+import {
+  checkJobTransition,
+  JOB_STATUSES,
+  JOB_TRANSITIONS,
+  jobHoldsStock,
+  JobStatus,
+  nextJobStatuses,
+} from './job-status';
 
 // The job workflow is Potlife's own (issue 5), no source.
 const ready = { hasAcceptedEstimate: true, hasScheduledDate: true };
@@ -28,7 +35,9 @@ describe('job status machine (Potlife’s own workflow, no source)', () => {
 
   // Every other pair of states is refused, naming both and the allowed next states.
   const refused = JOB_STATUSES.flatMap((from) =>
-    JOB_STATUSES.filter((to) => !allowed.some(([f, t]) => f === from && t === to)).map((to) => [from, to] as [JobStatus, JobStatus]),
+    JOB_STATUSES.filter((to) => !allowed.some(([f, t]) => f === from && t === to)).map(
+      (to) => [from, to] as [JobStatus, JobStatus],
+    ),
   );
 
   it.each(refused)('%s → %s is refused', (from, to) => {
@@ -70,7 +79,7 @@ describe('job status machine (Potlife’s own workflow, no source)', () => {
     ['enquiry', true],
     ['scheduled', true],
     ['in-progress', true],
-    ['complete', true],
+    ['complete', false],
     ['invoiced', false],
     ['lost', false],
     ['cancelled', false],

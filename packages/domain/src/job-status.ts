@@ -5,15 +5,7 @@ import { DomainError } from './errors';
  * complete → invoiced, or lost (the customer said no) or cancelled (the work will not happen).
  */
 export type JobStatus =
-  | 'enquiry'
-  | 'quoted'
-  | 'won'
-  | 'scheduled'
-  | 'in-progress'
-  | 'complete'
-  | 'invoiced'
-  | 'lost'
-  | 'cancelled';
+  'enquiry' | 'quoted' | 'won' | 'scheduled' | 'in-progress' | 'complete' | 'invoiced' | 'lost' | 'cancelled';
 
 export const JOB_STATUSES: readonly JobStatus[] = Object.freeze([
   'enquiry',
@@ -61,9 +53,12 @@ export function nextJobStatuses(from: JobStatus): readonly JobStatus[] {
   return next;
 }
 
-/** Whether a job in this state still holds (or may hold) stock: released on lost, cancelled. */
+/**
+ * Whether a job in this state may hold stock for its date. Once it is complete (what is left comes
+ * back as returns), invoiced, lost or cancelled, its reservations are released.
+ */
 export function jobHoldsStock(status: JobStatus): boolean {
-  return status !== 'lost' && status !== 'cancelled' && status !== 'invoiced';
+  return status !== 'complete' && status !== 'invoiced' && status !== 'lost' && status !== 'cancelled';
 }
 
 function list(states: readonly JobStatus[]): string {
@@ -78,7 +73,9 @@ function list(states: readonly JobStatus[]): string {
 export function checkJobTransition(from: JobStatus, to: JobStatus, facts: JobFacts): void {
   const allowed = nextJobStatuses(from);
   if (!JOB_STATUSES.includes(to)) {
-    throw new DomainError(`Unknown job status: ${JSON.stringify(to)}. A job's status is one of ${JOB_STATUSES.join(', ')}.`);
+    throw new DomainError(
+      `Unknown job status: ${JSON.stringify(to)}. A job's status is one of ${JOB_STATUSES.join(', ')}.`,
+    );
   }
   if (!allowed.includes(to)) {
     throw new DomainError(
@@ -87,7 +84,10 @@ export function checkJobTransition(from: JobStatus, to: JobStatus, facts: JobFac
     );
   }
   if (to === 'quoted' && !facts.hasAcceptedEstimate) {
-    throw new DomainError('Accept an estimate before marking the job quoted: the quote gives its price.', 'not-allowed');
+    throw new DomainError(
+      'Accept an estimate before marking the job quoted: the quote gives its price.',
+      'not-allowed',
+    );
   }
   if (to === 'scheduled' && !facts.hasScheduledDate) {
     throw new DomainError('Give the job a scheduled date before marking it scheduled.', 'not-allowed');
