@@ -78,6 +78,18 @@ describe('temperatures', () => {
     expect(lateLot.body.exposureFlagged).toBe(false);
   });
 
+  it('a reading in a store covers its bays and shelves, not a cabinet inside it', async () => {
+    const store = await createLocation(t, w.owner, { name: 'Logger store', kind: 'store' });
+    const bay = await createLocation(t, w.owner, { name: 'Logger store bay', kind: 'bay', parentId: store });
+    const cab = await createLocation(t, w.owner, { name: 'Logger store cabinet', kind: 'flammables-cabinet', parentId: store });
+    const inBay = await receive(t, w.storeman, [{ materialId: w.material.resin, locationId: bay, packs: 1, packSize: '25' }]);
+    await receive(t, w.storeman, [{ materialId: w.material.resin, locationId: cab, packs: 1, packSize: '5' }]);
+    const res = await reading({ locationId: store, temperatureC: '26', takenAt: new Date().toISOString() }).expect(201);
+    expect(res.body.flaggedLots.map((f: { lotId: string }) => f.lotId)).toEqual([inBay.lines[0]!.lotId]);
+    const band = await t.http().get(`/api/temperature-readings?locationId=${store}`).set(auth(w.storeman)).expect(200);
+    expect(band.body.band).toMatchObject({ minC: '5.0', maxC: '25.0' });
+  });
+
   it('too cold counts too, and the storeman may quarantine instead of clearing', async () => {
     const r = await receive(t, w.storeman, [{ materialId: w.material.catalyst, locationId: w.location.peroxide, packs: 3, packSize: '1' }]);
     // catalyst stored 0–25 °C: −2 °C is too cold

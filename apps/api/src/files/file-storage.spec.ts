@@ -28,12 +28,9 @@ describe('FileStorage', () => {
     expect(storage).toBeInstanceOf(S3FileStorage);
     const client = (storage as unknown as { client: S3Client }).client;
     expect(client.config.forcePathStyle).toBe(true);
-    const send = jest.spyOn(client, 'send').mockImplementation(async (cmd: unknown) => {
-      if (cmd instanceof GetObjectCommand) {
-        return { Body: { transformToByteArray: async () => new Uint8Array(Buffer.from('png bytes')) } };
-      }
-      return {};
-    });
+    const send = jest.spyOn(client, 'send').mockImplementation((cmd: unknown) =>
+      Promise.resolve(cmd instanceof GetObjectCommand ? { Body: { transformToByteArray: () => Promise.resolve(new Uint8Array(Buffer.from('png bytes'))) } } : {}) as never,
+    );
     await storage.put('c1/delivery-notes/a.png', Buffer.from('png bytes'), 'image/png');
     const put = send.mock.calls[0]![0] as PutObjectCommand;
     expect(put).toBeInstanceOf(PutObjectCommand);

@@ -4,6 +4,7 @@ import { randomUUID } from 'node:crypto';
 import { EntityManager } from 'typeorm';
 import type { FlaggedLotResponse } from './dto/temperature.dto';
 import { lotLabel } from './ledger.service';
+import { areaMembers, PlaceNode } from './placement';
 
 export interface ReadingInput {
   takenAt: Date;
@@ -34,7 +35,7 @@ const fmt = (d: Date) => d.toISOString().slice(0, 16).replace('T', ' ');
 /**
  * Temperature readings and the exposure flag. A reading outside a material's storage range
  * (domain checkStorageTemperature) flags every lot of that material that was stored at the
- * location at the moment of the reading — worked out from the ledger, so an imported logger file
+ * location (or a bay or shelf inside it) at the moment of the reading — worked out from the ledger, so an imported logger file
  * flags what was there then, even if it has moved since — as "check before use".
  * No constructor dependencies: the demo seed uses it too.
  */
@@ -95,6 +96,21 @@ export class ExposureService {
     return { saved, duplicates, flagged };
   }
 
+  /**
+   * Where a reading applies: the location and the bays and shelves inside it (open parts of the
+   * same room). A cabinet or store inside it keeps its own temperature and takes its own readings.
+   */
+  async readingArea(m: EntityManager, companyId: string, locationId: string): Promise<string[]> {
+    const rows: PlaceNode[] = await m.query(
+      `SELECT id, name, kind, parent_id AS "parentId", capacity_litres::text AS "capacityLitres", allowed_hazard_classes AS "allowedHazardClasses", active
+         FROM locations WHERE company_id = $1`,
+      [companyId],
+    );
+    const nodes = new Map(rows.map((r) => [r.id, r]));
+    const self = nodes.get(locationId);
+    return self ? [...areaMembers(self, nodes)] : [locationId];
+  }
+
   private async flag(
     m: EntityManager,
     ctx: { companyId: string; userId: string | null },
@@ -108,10 +124,11 @@ export class ExposureService {
     }
     const sorted = [...readings].sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime());
     const last = sorted[sorted.length - 1]!.takenAt;
+    const members = await this.readingArea(m, ctx.companyId, locationId);
     const moves: { lotId: string; quantity: string; at: Date }[] = await m.query(
       `SELECT lot_id AS "lotId", quantity::text AS quantity, created_at AS at FROM stock_movements
-        WHERE company_id = $1 AND location_id = $2 AND created_at <= $3 ORDER BY created_at, id`,
-      [ctx.companyId, locationId, last.toISOString()],
+        WHERE company_id = $1 AND location_id = ANY($2) AND created_at <= $3 ORDER BY created_at, id`,
+      [ctx.companyId, members, last.toISOString()],
     );
     if (moves.length === 0) {
       return [];
