@@ -4,7 +4,7 @@ import { randomUUID } from 'node:crypto';
 import { EntityManager } from 'typeorm';
 import type { FlaggedLotResponse } from './dto/temperature.dto';
 import { lotLabel } from './ledger.service';
-import { areaMembers, PlaceNode } from './placement';
+import { zoneMembers, PlaceNode } from './placement';
 
 export interface ReadingInput {
   takenAt: Date;
@@ -100,7 +100,7 @@ export class ExposureService {
    * Where a reading applies: the location and the bays and shelves inside it (open parts of the
    * same room). A cabinet or store inside it keeps its own temperature and takes its own readings.
    */
-  async readingArea(m: EntityManager, companyId: string, locationId: string): Promise<string[]> {
+  async readingZone(m: EntityManager, companyId: string, locationId: string): Promise<string[]> {
     const rows: PlaceNode[] = await m.query(
       `SELECT id, name, kind, parent_id AS "parentId", capacity_litres::text AS "capacityLitres", allowed_hazard_classes AS "allowedHazardClasses", active
          FROM locations WHERE company_id = $1`,
@@ -108,7 +108,7 @@ export class ExposureService {
     );
     const nodes = new Map(rows.map((r) => [r.id, r]));
     const self = nodes.get(locationId);
-    return self ? [...areaMembers(self, nodes)] : [locationId];
+    return self ? [...zoneMembers(self, nodes)] : [locationId];
   }
 
   private async flag(
@@ -124,7 +124,7 @@ export class ExposureService {
     }
     const sorted = [...readings].sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime());
     const last = sorted[sorted.length - 1]!.takenAt;
-    const members = await this.readingArea(m, ctx.companyId, locationId);
+    const members = await this.readingZone(m, ctx.companyId, locationId);
     const moves: { lotId: string; quantity: string; at: Date }[] = await m.query(
       `SELECT lot_id AS "lotId", quantity::text AS quantity, created_at AS at FROM stock_movements
         WHERE company_id = $1 AND location_id = ANY($2) AND created_at <= $3 ORDER BY created_at, id`,

@@ -6,7 +6,7 @@ import { RuleViolation } from '../common/http-exception.filter';
 import type { StockUnit } from '../catalogue/entities/material.entity';
 import type { LocationKind } from './entities/location.entity';
 import type { LotStatus } from './entities/lot.entity';
-import { checkPlacement, PlacedMaterial, PlaceNode, Present, Put, areaMembers, areaRoot } from './placement';
+import { checkPlacement, PlacedMaterial, PlaceNode, Present, Put, zoneMembers, zoneRoot } from './placement';
 
 /** A lot as the ledger works with it, with its material; read `FOR UPDATE`. */
 export interface LotRow {
@@ -93,7 +93,7 @@ const unitLabel = (u: string) => (u === 'm2' ? 'm²' : u);
  *
  * Locks are always taken in one order — lots (by id), then locations (by id), then balance rows —
  * so two requests never wait on each other in a circle. Every movement locks the locations it
- * touches (and, for stock put somewhere, the area that location belongs to), which serialises
+ * touches (and, for stock put somewhere, the zone that location belongs to), which serialises
  * segregation and capacity checks and makes a count's snapshot exact.
  */
 @Injectable()
@@ -119,7 +119,7 @@ export class LedgerService {
     return m.query(`${LOT_SELECT} WHERE l.company_id = $1 AND l.id = ANY($2)`, [companyId, [...new Set(lotIds)]]);
   }
 
-  /** Every location of the company (not locked): the tree that areas are worked out from. */
+  /** Every location of the company (not locked): the tree that zones are worked out from. */
   async allLocations(m: EntityManager, companyId: string): Promise<Map<string, LocationRow>> {
     const rows: LocationRow[] = await m.query(
       `SELECT id, company_id AS "companyId", name, kind, parent_id AS "parentId", capacity_litres::text AS "capacityLitres",
@@ -131,8 +131,8 @@ export class LedgerService {
   }
 
   /**
-   * Locks the locations touched and, for those stock is put into, the root of their area (so
-   * two requests putting stock into one area are checked one after the other). 404 if any
+   * Locks the locations touched and, for those stock is put into, the root of their zone (so
+   * two requests putting stock into one zone are checked one after the other). 404 if any
    * touched location is not the company's.
    */
   async lockLocations(
@@ -149,7 +149,7 @@ export class LedgerService {
     }
     const ids = new Set(touched);
     for (const id of putInto) {
-      ids.add(areaRoot(id, all).id);
+      ids.add(zoneRoot(id, all).id);
     }
     await m.query(`SELECT id FROM locations WHERE company_id = $1 AND id = ANY($2) ORDER BY id FOR UPDATE`, [companyId, [...ids].sort()]);
     // Re-read what was locked: a location edited meanwhile is seen as it is now.
@@ -202,13 +202,13 @@ export class LedgerService {
     if (puts.length === 0) {
       return [];
     }
-    const areaIds = new Set<string>();
+    const zoneIds = new Set<string>();
     for (const p of puts) {
-      for (const id of areaMembers(areaRoot(p.locationId, locations), locations)) {
-        areaIds.add(id);
+      for (const id of zoneMembers(zoneRoot(p.locationId, locations), locations)) {
+        zoneIds.add(id);
       }
     }
-    const present = await this.presentAt(m, companyId, [...areaIds]);
+    const present = await this.presentAt(m, companyId, [...zoneIds]);
     for (const d of deltas) {
       const row = present.find((p) => p.lotId === d.lotId && p.locationId === d.locationId);
       if (row) {

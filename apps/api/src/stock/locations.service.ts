@@ -7,7 +7,7 @@ import { RuleViolation } from '../common/http-exception.filter';
 import { Location, LocationKind } from './entities/location.entity';
 import { CreateLocationDto, LocationResponse, UpdateLocationDto } from './dto/location.dto';
 import { LedgerService } from './ledger.service';
-import { areaMembers, classLabel, countsAgainstCabinet, litresOf, Present } from './placement';
+import { zoneMembers, classLabel, countsAgainstCabinet, litresOf, Present } from './placement';
 
 /**
  * What each kind may hold unless the owner or storeman says otherwise: catalyst (5.2) only in the
@@ -70,7 +70,7 @@ export class LocationsService {
         const here = present.filter((p) => p.locationId === r.id);
         let litresHeld: string | null = null;
         if (r.kind === 'flammables-cabinet') {
-          const members = areaMembers(nodes.get(r.id)!, nodes);
+          const members = zoneMembers(nodes.get(r.id)!, nodes);
           litresHeld = cabinetLitres(present.filter((p) => members.has(p.locationId))).toFixed(3);
         }
         return {
@@ -171,7 +171,7 @@ export class LocationsService {
       await this.saveUnique(() => repo.save(loc), loc.name);
       if (loc.kind === 'flammables-cabinet') {
         const nodes = await this.ledger.allLocations(m, user.companyId);
-        const members = areaMembers(nodes.get(loc.id)!, nodes);
+        const members = zoneMembers(nodes.get(loc.id)!, nodes);
         const held = cabinetLitres(await this.ledger.presentAt(m, user.companyId, [...members]));
         if (held.gt(loc.capacityLitres ?? FLAMMABLES_WORKROOM_LIMIT_L)) {
           throw new RuleViolation(

@@ -6,7 +6,7 @@ import Papa from 'papaparse';
 dayjs.extend(utc);
 dayjs.extend(timezone);
 
-/** Times written without a zone are read as the firm's local time. */
+/** Times written without a time zone are read as the firm's local time. */
 export const LOCAL_ZONE = 'Europe/London';
 /** Readings below or above these are not storage temperatures (a probe unplugged, a typing slip). Potlife's own. */
 export const PLAUSIBLE_C = { min: -60, max: 100 };
@@ -32,7 +32,7 @@ export class CsvShapeError extends Error {}
 const norm = (h: string) => h.replace(/^\uFEFF/, '').trim().toLowerCase();
 
 /**
- * A moment from a logger's timestamp: ISO 8601 with a zone as written; "YYYY-MM-DD HH:mm[:ss]"
+ * A moment from a logger's timestamp: ISO 8601 with a time zone as written; "YYYY-MM-DD HH:mm[:ss]"
  * (or with T) and "DD/MM/YYYY HH:mm[:ss]" as local time in LOCAL_ZONE. Null if not a real moment.
  */
 export function parseTimestamp(raw: string): Date | null {

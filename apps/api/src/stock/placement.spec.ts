@@ -1,5 +1,5 @@
 import { Decimal, HazardClass } from '@potlife/domain';
-import { areaMembers, areaRoot, checkPlacement, findSegregationProblems, litresOf, PlaceNode, Present, PlacedMaterial } from './placement';
+import { zoneMembers, zoneRoot, checkPlacement, findSegregationProblems, litresOf, PlaceNode, Present, PlacedMaterial } from './placement';
 
 const node = (id: string, kind: PlaceNode['kind'], parentId: string | null = null, allowed: HazardClass[] = ['none', '3', '5.2'], capacityLitres: string | null = null): PlaceNode => ({
   id,
@@ -25,25 +25,25 @@ const acetone: PlacedMaterial = { name: 'acetone', hazardClass: '3', isAccelerat
 const catalyst: PlacedMaterial = { name: 'catalyst', hazardClass: '5.2', isAccelerator: false, stockUnit: 'kg', litresPerKg: null };
 const at = (lotId: string, locationId: string, q: string, material: PlacedMaterial): Present => ({ lotId, locationId, quantity: new Decimal(q), material });
 
-describe('areas', () => {
+describe('zones', () => {
   it.each([
     ['shelf', 'store'],
     ['bay', 'store'],
     ['store', 'store'],
     ['cabShelf', 'cab'],
     ['perox', 'perox'],
-  ])('%s belongs to the area of %s', (id, root) => {
-    expect(areaRoot(id, nodes).id).toBe(root);
+  ])('%s belongs to the zone of %s', (id, root) => {
+    expect(zoneRoot(id, nodes).id).toBe(root);
   });
 
-  it('an area is its root with the bays and shelves inside it, not the cabinets and stores', () => {
-    expect([...areaMembers(nodes.get('store')!, nodes)].sort()).toEqual(['bay', 'shelf', 'store']);
-    expect([...areaMembers(nodes.get('cab')!, nodes)].sort()).toEqual(['cab', 'cabShelf']);
+  it('a zone is its root with the bays and shelves inside it, not the cabinets and stores', () => {
+    expect([...zoneMembers(nodes.get('store')!, nodes)].sort()).toEqual(['bay', 'shelf', 'store']);
+    expect([...zoneMembers(nodes.get('cab')!, nodes)].sort()).toEqual(['cab', 'cabShelf']);
   });
 });
 
 describe('checkPlacement', () => {
-  it('refuses 5.2 beside 3 anywhere in one area, citing HSE CS21 / NFPA 400', () => {
+  it('refuses 5.2 beside 3 anywhere in one zone, citing HSE CS21 / NFPA 400', () => {
     const out = checkPlacement([{ lotId: 'c', locationId: 'shelf', quantity: new Decimal(1), material: catalyst }], [at('r', 'bay', '20', resin)], nodes);
     expect(out.ok).toBe(false);
     expect(!out.ok && out.message).toMatch(/catalyst cannot go to shelf \(in store\), which holds resin\. .*HSE CS21; NFPA 400/);
@@ -106,7 +106,7 @@ describe('checkPlacement', () => {
 });
 
 describe('findSegregationProblems', () => {
-  it('lists an area holding 3 and 5.2 once, and a class kept where it is not allowed', () => {
+  it('lists a zone holding 3 and 5.2 once, and a class kept where it is not allowed', () => {
     const problems = findSegregationProblems([at('r', 'bay', '20', resin), at('c', 'shelf', '1', catalyst), at('c2', 'cab', '1', catalyst)], nodes);
     expect(problems.map((p) => [p.locationName, p.classes])).toEqual([
       ['cab', ['5.2']],

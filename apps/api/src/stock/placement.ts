@@ -50,11 +50,11 @@ export type PlacementOutcome = { ok: true; warnings: string[] } | { ok: false; c
 const OPEN_KINDS: readonly LocationKind[] = ['bay', 'shelf'];
 
 /**
- * The area a location belongs to for segregation and capacity: the nearest location, itself or
+ * The zone a location belongs to for segregation and capacity: the nearest location, itself or
  * above it, that is not a bay or shelf; with every bay and shelf inside it. A flammables cabinet
- * or peroxide store inside the main store is an area of its own.
+ * or peroxide store inside the main store is a zone of its own.
  */
-export function areaRoot(id: string, nodes: ReadonlyMap<string, PlaceNode>): PlaceNode {
+export function zoneRoot(id: string, nodes: ReadonlyMap<string, PlaceNode>): PlaceNode {
   let node = nodes.get(id);
   if (!node) {
     throw new Error(`unknown location ${id}`);
@@ -71,8 +71,8 @@ export function areaRoot(id: string, nodes: ReadonlyMap<string, PlaceNode>): Pla
   return node;
 }
 
-/** The ids of an area: its root and the bays and shelves inside it (through bays and shelves only). */
-export function areaMembers(root: PlaceNode, nodes: ReadonlyMap<string, PlaceNode>): Set<string> {
+/** The ids of a zone: its root and the bays and shelves inside it (through bays and shelves only). */
+export function zoneMembers(root: PlaceNode, nodes: ReadonlyMap<string, PlaceNode>): Set<string> {
   const members = new Set<string>([root.id]);
   let grew = true;
   while (grew) {
@@ -122,7 +122,7 @@ export function countsAgainstCabinet(m: PlacedMaterial): boolean {
 /**
  * Whether `puts` may go where they are going, one after another (a later put sees the earlier
  * ones), given what is `present`: the location must be in use and allow the material's hazard
- * class; no class 5.2 with class 3 (or an accelerator) in the same area (domain checkSegregation,
+ * class; no class 5.2 with class 3 (or an accelerator) in the same zone (domain checkSegregation,
  * HSE CS21 / NFPA 400); a flammables cabinet may not go past its capacity (domain
  * checkFlammablesCapacity, HSE HSG51), and warns when nearly full.
  */
@@ -146,8 +146,8 @@ export function checkPlacement(puts: readonly Put[], present: readonly Present[]
         message: `${put.material.name} (${classLabel(cls)}) may not be stored in ${dest.name}, which may hold: ${allowed}. Choose another location, or change what ${dest.name} may hold.`,
       };
     }
-    const root = areaRoot(dest.id, nodes);
-    const members = areaMembers(root, nodes);
+    const root = zoneRoot(dest.id, nodes);
+    const members = zoneMembers(root, nodes);
     const here = state.filter((p) => members.has(p.locationId) && p.lotId !== put.lotId && p.quantity.gt(0));
     const presentClasses = [...new Set(here.flatMap((p) => segregationClasses(p.material)))];
     for (const c of segregationClasses(put.material)) {
@@ -201,7 +201,7 @@ export interface SegregationProblem {
   message: string;
 }
 
-/** Every area holding classes that may not be together, and every location holding a class it may not hold. */
+/** Every zone holding classes that may not be together, and every location holding a class it may not hold. */
 export function findSegregationProblems(present: readonly Present[], nodes: ReadonlyMap<string, PlaceNode>): SegregationProblem[] {
   const problems: SegregationProblem[] = [];
   const byRoot = new Map<string, Present[]>();
@@ -209,7 +209,7 @@ export function findSegregationProblems(present: readonly Present[], nodes: Read
     if (!nodes.has(p.locationId)) {
       continue;
     }
-    const root = areaRoot(p.locationId, nodes);
+    const root = zoneRoot(p.locationId, nodes);
     byRoot.set(root.id, [...(byRoot.get(root.id) ?? []), p]);
     const loc = nodes.get(p.locationId)!;
     if (!loc.allowedHazardClasses.includes(p.material.hazardClass)) {

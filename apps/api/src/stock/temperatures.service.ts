@@ -139,12 +139,12 @@ export class TemperaturesService {
 
   /** The strictest range of the materials stored at a location (and its bays and shelves) now: the highest minimum and the lowest maximum. */
   async band(companyId: string, locationId: string): Promise<TemperatureBandResponse> {
-    const area = await this.exposure.readingArea(this.db.manager, companyId, locationId);
+    const zone = await this.exposure.readingZone(this.db.manager, companyId, locationId);
     const rows: { name: string; minC: string | null; maxC: string | null }[] = await this.db.query(
       `SELECT DISTINCT mt.name, mt.storage_min_c::text AS "minC", mt.storage_max_c::text AS "maxC"
          FROM lot_balances b JOIN lots l ON l.id = b.lot_id JOIN materials mt ON mt.id = l.material_id
         WHERE b.company_id = $1 AND b.location_id = ANY($2) AND b.quantity > 0 ORDER BY mt.name`,
-      [companyId, area],
+      [companyId, zone],
     );
     let min: Decimal | null = null;
     let max: Decimal | null = null;

@@ -39,7 +39,7 @@ const LOCATIONS: DemoLocation[] = [
   { key: 'cabinet', name: 'Flammables cabinet', kind: 'flammables-cabinet', parent: 'store', capacityLitres: '50', notes: 'Fire-resisting cabinet by the door: acetone and part-used tins only' },
   { key: 'peroxide', name: 'Peroxide store', kind: 'peroxide-store', notes: 'Vented steel locker on the far wall of the yard, away from the resin bay' },
   { key: 'van', name: 'Van 1', kind: 'van', notes: 'Crew van, kept on the yard overnight' },
-  { key: 'outdoor', name: 'Outdoor compound', kind: 'outdoor', notes: 'Fenced area for battens and offcuts' },
+  { key: 'outdoor', name: 'Outdoor compound', kind: 'outdoor', notes: 'Fenced yard for battens and offcuts' },
 ];
 
 interface DemoLine {

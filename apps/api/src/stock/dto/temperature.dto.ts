@@ -23,7 +23,7 @@ export class ImportReadingsDto {
     example: 'timestamp,temperature\n2025-06-01T06:00:00Z,17.8\n2025-06-01 12:00,21.4',
     description:
       'a data logger’s CSV with a header row: a timestamp column (timestamp, time, date/time…) and a temperature column (temperature, temp, °C…). ' +
-      'Times without a zone are UK local time; DD/MM/YYYY HH:mm is read as day first.',
+      'Times without a time zone are UK local time; DD/MM/YYYY HH:mm is read as day first.',
   })
   @IsString()
   @MinLength(1, { message: 'must not be empty' })
