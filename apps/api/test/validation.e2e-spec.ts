@@ -5,7 +5,7 @@ import { auth, createTestApp, registerCompany, Session, TestApp, uniqueEmail } f
  * field, never 500. Each body route lists a valid body and which fields are required.
  */
 interface BodyRoute {
-  method: 'post' | 'patch';
+  method: 'post' | 'patch' | 'put';
   path: (s: Session) => string;
   valid: () => Record<string, unknown>;
   required: string[];
@@ -223,6 +223,105 @@ const BODY_ROUTES: Record<string, BodyRoute> = {
     path: () => '/api/temperature-readings/import',
     valid: () => ({ locationId: '00000000-0000-4000-8000-0000000000a1', csv: 'timestamp,temperature\n2025-06-01T06:00:00Z,17.8\n', dryRun: true }),
     required: ['locationId', 'csv'],
+    token: true,
+  },
+  // Jobs: customers, build-ups, jobs, roofs, estimates, the laying check, issues and returns.
+  'POST /api/customers': {
+    method: 'post',
+    path: () => '/api/customers',
+    valid: () => ({ name: 'Valid Customer', contactName: 'C', email: 'c@example.test', phone: '01632 960 000', billingAddress: '1 Road', notes: 'n' }),
+    required: ['name'],
+    token: true,
+  },
+  'PATCH /api/customers/{id}': {
+    method: 'patch',
+    path: () => `/api/customers/${'00000000-0000-4000-8000-0000000000b1'}`,
+    valid: () => ({ name: 'Renamed', phone: '01632 960 001' }),
+    required: [],
+    token: true,
+  },
+  'POST /api/build-ups': {
+    method: 'post',
+    path: () => '/api/build-ups',
+    valid: () => ({ name: 'Valid build-up', labourRate: '32.00', markupPct: '25', vatRatePct: '20', layers: '2', catalystBands: [{ fromC: '5', percent: '3' }], battenMPerEdgeM: { drip: '2' } }),
+    required: ['name', 'labourRate', 'markupPct'],
+    token: true,
+  },
+  'PATCH /api/build-ups/{id}': {
+    method: 'patch',
+    path: () => `/api/build-ups/${'00000000-0000-4000-8000-0000000000b1'}`,
+    valid: () => ({ markupPct: '30', active: false }),
+    required: [],
+    token: true,
+  },
+  'POST /api/jobs': {
+    method: 'post',
+    path: () => '/api/jobs',
+    valid: () => ({ customerId: '00000000-0000-4000-8000-0000000000b1', siteAddress: '1 Road', substrate: 'osb', title: 'T', scheduledOn: '2026-05-18', crew: 'C', topcoatColour: 'Slate grey', notes: 'n' }),
+    required: ['customerId', 'siteAddress', 'substrate'],
+    token: true,
+  },
+  'PATCH /api/jobs/{id}': {
+    method: 'patch',
+    path: () => `/api/jobs/${'00000000-0000-4000-8000-0000000000b1'}`,
+    valid: () => ({ crew: 'C', scheduledOn: '2026-05-18', substrate: 'concrete' }),
+    required: [],
+    token: true,
+  },
+  'POST /api/jobs/{id}/status': {
+    method: 'post',
+    path: () => `/api/jobs/${'00000000-0000-4000-8000-0000000000b1'}/status`,
+    valid: () => ({ status: 'quoted', reason: 'r' }),
+    required: ['status'],
+    token: true,
+  },
+  'PUT /api/jobs/{id}/roof': {
+    method: 'put',
+    path: () => `/api/jobs/${'00000000-0000-4000-8000-0000000000b1'}/roof`,
+    valid: () => ({
+      areas: [{ name: 'A', shape: 'rectangle', lengthM: '4', widthM: '3' }],
+      edges: [{ kind: 'drip', lengthM: '4' }],
+      pipes: 1,
+      outlets: 1,
+      corners: { external: 2 },
+      notes: 'n',
+    }),
+    required: ['areas', 'edges'],
+    token: true,
+  },
+  'PATCH /api/settings/jobs': {
+    method: 'patch',
+    path: () => '/api/settings/jobs',
+    valid: () => ({ reservationMarginDays: 7, quoteValidityDays: 30 }),
+    required: [],
+    token: true,
+  },
+  'POST /api/jobs/{id}/estimates': {
+    method: 'post',
+    path: () => `/api/jobs/${'00000000-0000-4000-8000-0000000000b1'}/estimates`,
+    valid: () => ({ buildUpId: '00000000-0000-4000-8000-0000000000b1', airC: '12', materials: [{ role: 'mat', materialId: '00000000-0000-4000-8000-0000000000b1' }], note: 'n' }),
+    required: [],
+    token: true,
+  },
+  'POST /api/laying-check': {
+    method: 'post',
+    path: () => '/api/laying-check',
+    valid: () => ({ airC: '12', surfaceC: '10', relativeHumidityPct: '70', raining: false }),
+    required: ['airC', 'surfaceC', 'relativeHumidityPct', 'raining'],
+    token: true,
+  },
+  'POST /api/jobs/{id}/issues': {
+    method: 'post',
+    path: () => `/api/jobs/${'00000000-0000-4000-8000-0000000000b1'}/issues`,
+    valid: () => ({ lines: [{ lotId: '00000000-0000-4000-8000-0000000000b1', quantity: '5' }], note: 'n' }),
+    required: ['lines'],
+    token: true,
+  },
+  'POST /api/jobs/{id}/returns': {
+    method: 'post',
+    path: () => `/api/jobs/${'00000000-0000-4000-8000-0000000000b1'}/returns`,
+    valid: () => ({ lines: [{ lotId: '00000000-0000-4000-8000-0000000000b1', partQuantity: '1.5' }], note: 'n' }),
+    required: ['lines'],
     token: true,
   },
 };

@@ -17,7 +17,10 @@ export class BuildUpsController {
   @Get()
   @Roles('owner', 'estimator')
   @ApiQuery({ name: 'includeInactive', required: false, type: Boolean })
-  list(@CurrentUser() user: AuthUser, @Query('includeInactive') includeInactive?: string): Promise<BuildUpResponse[]> {
+  list(
+    @CurrentUser() user: AuthUser,
+    @Query('includeInactive') includeInactive?: string,
+  ): Promise<BuildUpResponse[]> {
     return this.buildUps.list(user.companyId, includeInactive === 'true');
   }
 
@@ -35,7 +38,11 @@ export class BuildUpsController {
 
   @Patch(':id')
   @Roles('owner')
-  update(@CurrentUser() user: AuthUser, @Param('id', ID) id: string, @Body() dto: UpdateBuildUpDto): Promise<BuildUpResponse> {
+  update(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ID) id: string,
+    @Body() dto: UpdateBuildUpDto,
+  ): Promise<BuildUpResponse> {
     return this.buildUps.update(user.companyId, id, dto);
   }
 }

@@ -1,12 +1,27 @@
 import { HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { BuildUpInput, DEFAULT_BUILD_UP, DomainError, EDGE_KINDS, EdgeKind, resolveBuildUp } from '@potlife/domain';
+import {
+  BuildUpInput,
+  DEFAULT_BUILD_UP,
+  DomainError,
+  EDGE_KINDS,
+  EdgeKind,
+  resolveBuildUp,
+} from '@potlife/domain';
 import { EntityManager, QueryFailedError, Repository } from 'typeorm';
 import { RuleViolation } from '../common/http-exception.filter';
-import { BuildUpRatesDto, buildUpResponse, BuildUpResponse, CreateBuildUpDto, UpdateBuildUpDto } from './dto/build-up.dto';
+import {
+  BuildUpRatesDto,
+  buildUpResponse,
+  BuildUpResponse,
+  CreateBuildUpDto,
+  UpdateBuildUpDto,
+} from './dto/build-up.dto';
 import { BuildUp, BuildUpRates, SCALAR_RATES } from './entities/build-up.entity';
 
-const perEdge = (r: Readonly<Record<EdgeKind, number | string | { toString(): string }>>): Record<EdgeKind, string> =>
+const perEdge = (
+  r: Readonly<Record<EdgeKind, number | string | { toString(): string }>>,
+): Record<EdgeKind, string> =>
   Object.fromEntries(EDGE_KINDS.map((k) => [k, String(r[k])])) as Record<EdgeKind, string>;
 
 /** DEFAULT_BUILD_UP as stored rates (decimal strings). */
@@ -17,7 +32,10 @@ export function defaultRates(): BuildUpRates {
   >;
   return {
     ...scalars,
-    catalystBands: DEFAULT_BUILD_UP.catalystBands.map((b) => ({ fromC: String(b.fromC), percent: String(b.percent) })),
+    catalystBands: DEFAULT_BUILD_UP.catalystBands.map((b) => ({
+      fromC: String(b.fromC),
+      percent: String(b.percent),
+    })),
     battenMPerEdgeM: perEdge(DEFAULT_BUILD_UP.battenMPerEdgeM),
     nailsPerEdgeM: perEdge(DEFAULT_BUILD_UP.nailsPerEdgeM),
   };
@@ -30,7 +48,11 @@ export function toDomainBuildUp(rates: BuildUpRates): BuildUpInput {
 
 /** The rates given in a body laid over a base. */
 function mergeRates(base: BuildUpRates, dto: BuildUpRatesDto): BuildUpRates {
-  const out: BuildUpRates = { ...base, battenMPerEdgeM: { ...base.battenMPerEdgeM }, nailsPerEdgeM: { ...base.nailsPerEdgeM } };
+  const out: BuildUpRates = {
+    ...base,
+    battenMPerEdgeM: { ...base.battenMPerEdgeM },
+    nailsPerEdgeM: { ...base.nailsPerEdgeM },
+  };
   for (const key of SCALAR_RATES) {
     const v = dto[key];
     if (v !== undefined) {
@@ -55,7 +77,11 @@ export function checkRates(rates: BuildUpRates): void {
     resolveBuildUp(toDomainBuildUp(rates));
   } catch (e) {
     if (e instanceof DomainError) {
-      throw new RuleViolation(`This build-up cannot be used: ${e.message}`, 'invalid_build_up', HttpStatus.UNPROCESSABLE_ENTITY);
+      throw new RuleViolation(
+        `This build-up cannot be used: ${e.message}`,
+        'invalid_build_up',
+        HttpStatus.UNPROCESSABLE_ENTITY,
+      );
     }
     throw e;
   }

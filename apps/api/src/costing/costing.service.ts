@@ -68,8 +68,13 @@ type Fit = (m: Material, line: TakeoffLine, ctx: MatchContext) => number | null;
 const sameNumber = (a: Numeric | null | undefined, b: Numeric | null | undefined): boolean =>
   a !== null && a !== undefined && b !== null && b !== undefined && new Decimal(a).eq(b);
 
+/**
+ * The catalogue has no field for corner pieces: a trim whose name says "corner" is one, and
+ * "external" or "internal" in the name says which.
+ */
+const isCornerPiece = (m: Material): boolean => /\bcorner/i.test(m.name);
 const isCorner = (m: Material, which: 'external' | 'internal'): boolean =>
-  m.trimKind === null && new RegExp(`\\b${which}\\b`, 'i').test(m.name) && /\bcorner/i.test(m.name);
+  isCornerPiece(m) && new RegExp(`\\b${which}\\b`, 'i').test(m.name);
 
 /**
  * How each take-off role finds its catalogue material: by kind and the kind's own fields. A role
@@ -80,7 +85,8 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
     case 'mat':
       return {
         kind: 'mat',
-        fit: (m, _l, c) => (sameNumber(m.matGsm, c.matGsm) ? (sameNumber(m.rollWidthM, c.rollWidthM) ? 0 : 1) : null),
+        fit: (m, _l, c) =>
+          sameNumber(m.matGsm, c.matGsm) ? (sameNumber(m.rollWidthM, c.rollWidthM) ? 0 : 1) : null,
         need: 'a mat of the build-up’s weight',
       };
     case 'base-resin':
@@ -90,7 +96,11 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
       return {
         kind: 'topcoat',
         fit: (m, _l, c) =>
-          c.topcoatColour === null ? 0 : (m.topcoatColour ?? '').trim().toLowerCase() === c.topcoatColour.trim().toLowerCase() ? 0 : null,
+          c.topcoatColour === null
+            ? 0
+            : (m.topcoatColour ?? '').trim().toLowerCase() === c.topcoatColour.trim().toLowerCase()
+              ? 0
+              : null,
         need: 'a topcoat of the job’s colour',
       };
     case 'catalyst':
@@ -102,7 +112,12 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
       const edge = role.slice(5);
       return {
         kind: 'trim',
-        fit: (m, _l, c) => (m.trimKind === edge ? (sameNumber(m.trimLengthM, c.trimLengthM) ? 0 : 1) : null),
+        fit: (m, _l, c) =>
+          m.trimKind === edge && !isCornerPiece(m)
+            ? sameNumber(m.trimLengthM, c.trimLengthM)
+              ? 0
+              : 1
+            : null,
         need: `a ${edge} trim`,
       };
     }
@@ -112,7 +127,7 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
       return {
         kind: 'trim',
         fit: (m) => (isCorner(m, which) ? 0 : null),
-        need: `an ${which} corner piece (a trim with no trim kind and “${which} corner” in its name)`,
+        need: `an ${which} corner piece (a trim with “${which}” and “corner” in its name)`,
       };
     }
     case 'outlet':
@@ -168,7 +183,10 @@ export class CostingService {
           materials.set(line.role, found);
           continue;
         }
-        problems.set(line.role, `The material chosen for ${line.role} is not an active ${spec.kind} of this company; the best fit was used.`);
+        problems.set(
+          line.role,
+          `The material chosen for ${line.role} is not an active ${spec.kind} of this company; the best fit was used.`,
+        );
       }
       let best: Material | null = null;
       let bestFit = Number.POSITIVE_INFINITY;
@@ -184,7 +202,10 @@ export class CostingService {
       }
       materials.set(line.role, best);
       if (!best) {
-        problems.set(line.role, `No material in the catalogue for ${line.description.toLowerCase()}: add ${spec.need}.`);
+        problems.set(
+          line.role,
+          `No material in the catalogue for ${line.description.toLowerCase()}: add ${spec.need}.`,
+        );
       }
     }
     return { materials, problems };
@@ -194,27 +215,43 @@ export class CostingService {
    * The cheapest current price of each pack size of each material on a date: for every supplier
    * its latest price valid on the date (the price history's rule), then the cheapest supplier.
    */
-  async currentPrices(companyId: string, materialIds: string[], onDate: string, m?: EntityManager): Promise<Map<string, PackPrice>> {
+  async currentPrices(
+    companyId: string,
+    materialIds: string[],
+    onDate: string,
+    m?: EntityManager,
+  ): Promise<Map<string, PackPrice>> {
     const out = new Map<string, PackPrice>();
     if (materialIds.length === 0) {
       return out;
     }
     const runner = m ?? this.materials.manager;
-    const rows: { material_id: string; pack_size: string; pack_price: string; supplier_id: string; supplier_name: string; lead_time_days: number }[] =
-      await runner.query(
-        `SELECT * FROM (
+    const rows: {
+      material_id: string;
+      pack_size: string;
+      pack_price: string;
+      supplier_id: string;
+      supplier_name: string;
+      lead_time_days: number;
+    }[] = await runner.query(
+      `SELECT * FROM (
            SELECT DISTINCT ON (p.material_id, p.pack_size, p.supplier_id)
                   p.material_id, p.pack_size::text, p.pack_price::text, p.supplier_id, s.name AS supplier_name, s.lead_time_days
              FROM supplier_prices p JOIN suppliers s ON s.id = p.supplier_id AND s.active
             WHERE p.company_id = $1 AND p.material_id = ANY($2) AND p.valid_from <= $3
             ORDER BY p.material_id, p.pack_size, p.supplier_id, p.valid_from DESC, p.created_at DESC
          ) cur ORDER BY material_id, pack_size, pack_price, lead_time_days, supplier_name`,
-        [companyId, materialIds, onDate],
-      );
+      [companyId, materialIds, onDate],
+    );
     for (const r of rows) {
       const key = priceKey(r.material_id, r.pack_size);
       if (!out.has(key)) {
-        out.set(key, { packPrice: r.pack_price, supplierId: r.supplier_id, supplierName: r.supplier_name, leadTimeDays: r.lead_time_days });
+        out.set(key, {
+          packPrice: r.pack_price,
+          supplierId: r.supplier_id,
+          supplierName: r.supplier_name,
+          leadTimeDays: r.lead_time_days,
+        });
       }
     }
     return out;
@@ -235,7 +272,13 @@ export class CostingService {
     chosen?: ReadonlyMap<LineRole, string>,
     m?: EntityManager,
   ): Promise<CostedTakeoff> {
-    const { materials: lineMaterials, problems } = await this.matchMaterials(companyId, takeoff.lines, ctx, chosen, m);
+    const { materials: lineMaterials, problems } = await this.matchMaterials(
+      companyId,
+      takeoff.lines,
+      ctx,
+      chosen,
+      m,
+    );
     const groups: CostedMaterial[] = [];
     const byMaterial = new Map<string, CostedMaterial>();
     for (const line of takeoff.lines) {
@@ -254,7 +297,13 @@ export class CostingService {
         group.roles.push(line.role);
         group.quantity = group.quantity.plus(converted.quantity);
       } else {
-        const g = blank(line, material, converted.quantity, material.stockUnit, problems.get(line.role) ?? null);
+        const g = blank(
+          line,
+          material,
+          converted.quantity,
+          material.stockUnit,
+          problems.get(line.role) ?? null,
+        );
         byMaterial.set(material.id, g);
         groups.push(g);
       }
@@ -272,8 +321,16 @@ export class CostingService {
       g.leftover = choice.leftover;
       g.packs = choice.packs.map((p) => {
         const price = prices.get(priceKey(material.id, p.size.toString())) ?? null;
-        const label = material.packSizes.find((s) => new Decimal(s.size).eq(p.size))?.label ?? `${p.size.toString()} ${material.stockUnit}`;
-        return { size: p.size, label, count: p.count, price, cost: price ? roundMoney(new Decimal(price.packPrice).times(p.count)) : null };
+        const label =
+          material.packSizes.find((s) => new Decimal(s.size).eq(p.size))?.label ??
+          `${p.size.toString()} ${material.stockUnit}`;
+        return {
+          size: p.size,
+          label,
+          count: p.count,
+          price,
+          cost: price ? roundMoney(new Decimal(price.packPrice).times(p.count)) : null,
+        };
       });
       const missing = g.packs.filter((p) => p.price === null);
       if (missing.length > 0) {
@@ -284,7 +341,9 @@ export class CostingService {
     }
     const priced = groups.filter((g) => g.cost !== null);
     const price = priceEstimate(
-      priced.flatMap((g) => g.packs.map((p) => ({ quantity: p.count, unitCost: (p.price as PackPrice).packPrice }))),
+      priced.flatMap((g) =>
+        g.packs.map((p) => ({ quantity: p.count, unitCost: (p.price as PackPrice).packPrice })),
+      ),
       takeoff.labour.totalHours,
       money.labourRate,
       money.markupPct,
@@ -294,7 +353,13 @@ export class CostingService {
   }
 }
 
-function blank(line: TakeoffLine, material: Material | null, quantity: Decimal, unit: Unit | string, problem: string | null): CostedMaterial {
+function blank(
+  line: TakeoffLine,
+  material: Material | null,
+  quantity: Decimal,
+  unit: Unit | string,
+  problem: string | null,
+): CostedMaterial {
   return {
     roles: [line.role],
     materialKind: line.material,

@@ -3,7 +3,15 @@ import { toStockUnit } from './units';
 
 const ctx = { matGsm: '450', bandageWidthMm: '100', bandageGsm: '450', trimLengthM: '3' };
 const material = (over: Record<string, unknown>) =>
-  ({ name: 'X', stockUnit: 'kg', matGsm: null, rollWidthM: null, trimLengthM: null, litresPerKg: null, ...over }) as never;
+  ({
+    name: 'X',
+    stockUnit: 'kg',
+    matGsm: null,
+    rollWidthM: null,
+    trimLengthM: null,
+    litresPerKg: null,
+    ...over,
+  }) as never;
 
 describe('toStockUnit', () => {
   it.each([

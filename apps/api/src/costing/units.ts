@@ -37,7 +37,9 @@ export function toStockUnit(
     return { ok: true, quantity: quantity.times(gsmToKgPerM2(gsm)) };
   }
   if (from === 'm' && (to === 'm2' || to === 'kg')) {
-    const widthM = material.rollWidthM ? new Decimal(material.rollWidthM) : new Decimal(ctx.bandageWidthMm).div(MM_PER_M);
+    const widthM = material.rollWidthM
+      ? new Decimal(material.rollWidthM)
+      : new Decimal(ctx.bandageWidthMm).div(MM_PER_M);
     const m2 = quantity.times(widthM);
     if (to === 'm2') {
       return { ok: true, quantity: m2 };

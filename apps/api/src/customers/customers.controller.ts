@@ -3,7 +3,13 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { AuthUser, CurrentUser } from '../common/current-user';
 import { Roles } from '../common/roles';
 import { CustomersService } from './customers.service';
-import { CreateCustomerDto, CustomerPage, CustomerResponse, ListCustomersQuery, UpdateCustomerDto } from './dto/customer.dto';
+import {
+  CreateCustomerDto,
+  CustomerPage,
+  CustomerResponse,
+  ListCustomersQuery,
+  UpdateCustomerDto,
+} from './dto/customer.dto';
 
 const ID = new ParseUUIDPipe({ errorHttpStatusCode: 404 });
 
@@ -30,7 +36,11 @@ export class CustomersController {
   }
 
   @Patch(':id')
-  update(@CurrentUser() user: AuthUser, @Param('id', ID) id: string, @Body() dto: UpdateCustomerDto): Promise<CustomerResponse> {
+  update(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ID) id: string,
+    @Body() dto: UpdateCustomerDto,
+  ): Promise<CustomerResponse> {
     return this.customers.update(user.companyId, id, dto);
   }
 }

@@ -1,7 +1,13 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { EntityManager, Repository } from 'typeorm';
-import { CreateCustomerDto, CustomerPage, CustomerResponse, ListCustomersQuery, UpdateCustomerDto } from './dto/customer.dto';
+import {
+  CreateCustomerDto,
+  CustomerPage,
+  CustomerResponse,
+  ListCustomersQuery,
+  UpdateCustomerDto,
+} from './dto/customer.dto';
 import { Customer } from './entities/customer.entity';
 
 @Injectable()
@@ -22,7 +28,10 @@ export class CustomersService {
       .skip((page - 1) * pageSize)
       .take(pageSize)
       .getManyAndCount();
-    const counts = await this.jobCounts(companyId, rows.map((r) => r.id));
+    const counts = await this.jobCounts(
+      companyId,
+      rows.map((r) => r.id),
+    );
     return { items: rows.map((r) => CustomerResponse.from(r, counts.get(r.id) ?? 0)), total, page, pageSize };
   }
 

@@ -3,7 +3,13 @@ import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { AuthUser, CurrentUser } from '../common/current-user';
 import { ANY_ROLE, Roles } from '../common/roles';
-import { CreateEstimateDto, EstimateResponse, EstimateSummaryResponse, LayingCheckDto, LayingCheckResponse } from './dto/estimate.dto';
+import {
+  CreateEstimateDto,
+  EstimateResponse,
+  EstimateSummaryResponse,
+  LayingCheckDto,
+  LayingCheckResponse,
+} from './dto/estimate.dto';
 import { EstimatesService } from './estimates.service';
 import { ID } from './jobs.controller';
 import { QuoteService } from './quote.service';
@@ -24,7 +30,11 @@ export class EstimatesController {
 
   @Post('jobs/:id/estimates')
   @Roles('owner', 'estimator')
-  create(@CurrentUser() user: AuthUser, @Param('id', ID) id: string, @Body() dto: CreateEstimateDto): Promise<EstimateResponse> {
+  create(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ID) id: string,
+    @Body() dto: CreateEstimateDto,
+  ): Promise<EstimateResponse> {
     return this.estimates.create(user, id, dto);
   }
 
@@ -36,14 +46,22 @@ export class EstimatesController {
 
   @Get('jobs/:id/estimates/:n')
   @Roles('owner', 'estimator')
-  get(@CurrentUser() user: AuthUser, @Param('id', ID) id: string, @Param('n', VERSION) n: number): Promise<EstimateResponse> {
+  get(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ID) id: string,
+    @Param('n', VERSION) n: number,
+  ): Promise<EstimateResponse> {
     return this.estimates.get(user, id, n);
   }
 
   @Post('jobs/:id/estimates/:n/accept')
   @HttpCode(200)
   @Roles('owner', 'estimator')
-  accept(@CurrentUser() user: AuthUser, @Param('id', ID) id: string, @Param('n', VERSION) n: number): Promise<EstimateResponse> {
+  accept(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ID) id: string,
+    @Param('n', VERSION) n: number,
+  ): Promise<EstimateResponse> {
     return this.estimates.accept(user, id, n, (m, job, e) => this.reservations.beforeAccept(m, job, e));
   }
 

@@ -13,6 +13,7 @@ import {
 } from '@potlife/domain';
 import { DataSource, EntityManager, In } from 'typeorm';
 import { BuildUpsService, toDomainBuildUp } from '../build-ups/build-ups.service';
+import type { BuildUp } from '../build-ups/entities/build-up.entity';
 import type { AuthUser } from '../common/current-user';
 import { RuleViolation } from '../common/http-exception.filter';
 import { CostingService } from '../costing/costing.service';
@@ -77,131 +78,21 @@ export class EstimatesService {
       }
       const buildUpId = dto.buildUpId ?? job.buildUpId;
       if (!buildUpId) {
-        throw new RuleViolation('Choose a build-up for the job (or give buildUpId) before estimating', 'no_build_up');
+        throw new RuleViolation(
+          'Choose a build-up for the job (or give buildUpId) before estimating',
+          'no_build_up',
+        );
       }
       const buildUp = await this.buildUps.find(user.companyId, buildUpId, m);
-      const airC = dto.airC ?? '20';
-      let takeoff: Takeoff;
-      try {
-        takeoff = estimateRoof(toDomainRoof(job.roof, airC), toDomainBuildUp(buildUp.rates));
-      } catch (e) {
-        if (e instanceof DomainError) {
-          throw new RuleViolation(e.message, e.code === 'too-cold' ? 'too_cold' : 'invalid_roof', HttpStatus.UNPROCESSABLE_ENTITY);
-        }
-        throw e;
-      }
-      const pricedOn = today();
-      const chosen = new Map<LineRole, string>((dto.materials ?? []).map((c) => [c.role, c.materialId]));
-      const costed = await this.costing.costTakeoff(
-        user.companyId,
-        takeoff,
-        {
-          matGsm: buildUp.rates.matGsm,
-          rollWidthM: buildUp.rates.rollWidthM,
-          bandageWidthMm: buildUp.rates.bandageWidthMm,
-          bandageGsm: buildUp.rates.bandageGsm,
-          trimLengthM: buildUp.rates.trimLengthM,
-          topcoatColour: job.topcoatColour,
-        },
-        { labourRate: buildUp.labourRate, markupPct: buildUp.markupPct, vatRatePct: buildUp.vatRatePct },
-        pricedOn,
-        chosen,
-        m,
-      );
-      const [{ next }] = (await m.query(`SELECT coalesce(max(version), 0) + 1 AS next FROM estimates WHERE job_id = $1`, [job.id])) as [
-        { next: number },
-      ];
-      const p = costed.price;
-      const estimate = await m.getRepository(Estimate).save(
-        m.getRepository(Estimate).create({
-          companyId: user.companyId,
-          jobId: job.id,
-          version: next,
-          buildUpId: buildUp.id,
-          buildUpName: buildUp.name,
-          buildUp: { rates: buildUp.rates, labourRate: buildUp.labourRate, markupPct: buildUp.markupPct, vatRatePct: buildUp.vatRatePct },
-          roof: job.roof,
-          pricedOn,
-          airC: takeoff.airC.toString(),
-          catalystPct: takeoff.catalystPercent.toString(),
-          deckAreaM2: takeoff.deckAreaM2.toString(),
-          upstandAreaM2: takeoff.upstandAreaM2.toString(),
-          laminatedAreaM2: takeoff.laminatedAreaM2.toString(),
-          trimM: takeoff.trimM.toString(),
-          cornersExternal: takeoff.corners.external,
-          cornersInternal: takeoff.corners.internal,
-          cornersDerived: takeoff.corners.derived,
-          pipes: takeoff.pipes,
-          outlets: takeoff.outlets,
-          laminatingHours: takeoff.labour.laminatingHours.toString(),
-          trimHours: takeoff.labour.trimHours.toString(),
-          labourHours: takeoff.labour.totalHours.toString(),
-          labourRate: buildUp.labourRate,
-          materialCost: p.materialCost.toString(),
-          labourCost: p.labourCost.toString(),
-          markupPct: buildUp.markupPct,
-          markup: p.markup.toString(),
-          net: p.net.toString(),
-          vatRatePct: buildUp.vatRatePct,
-          vat: p.vat.toString(),
-          gross: p.gross.toString(),
-          unpriced: costed.unpriced,
-          cautions: takeoff.cautions,
-          note: dto.note ?? null,
-          createdBy: user.id,
-          acceptedAt: null,
-          acceptedBy: null,
-        }),
-      );
-      await m.getRepository(EstimateLine).insert(
-        takeoff.lines.map((l, i) => ({
-          companyId: user.companyId,
-          estimateId: estimate.id,
-          position: i + 1,
-          role: l.role,
-          materialKind: l.material,
-          description: l.description,
-          unit: l.unit,
-          quantity: l.quantity.toString(),
-          lengths: l.lengths ?? null,
-          metres: l.metres ? l.metres.toString() : null,
-          materialId: costed.lineMaterials.get(l.role)?.id ?? null,
-        })),
-      );
-      for (const [i, g] of costed.materials.entries()) {
-        const row = await m.getRepository(EstimateMaterial).save({
-          companyId: user.companyId,
-          estimateId: estimate.id,
-          position: i + 1,
-          roles: g.roles,
-          materialKind: g.materialKind,
-          materialId: g.material?.id ?? null,
-          materialName: g.material?.name ?? null,
-          stockUnit: g.unit,
-          quantity: g.quantity.toString(),
-          packTotal: g.packTotal ? g.packTotal.toString() : null,
-          leftover: g.leftover ? g.leftover.toString() : null,
-          cost: g.cost ? g.cost.toString() : null,
-          problem: g.problem,
-        });
-        if (g.packs.length > 0) {
-          await m.getRepository(EstimatePack).insert(
-            g.packs.map((pk) => ({
-              companyId: user.companyId,
-              estimateMaterialId: row.id,
-              packSize: pk.size.toString(),
-              label: pk.label,
-              count: pk.count,
-              packPrice: pk.price?.packPrice ?? null,
-              supplierId: pk.price?.supplierId ?? null,
-              supplierName: pk.price?.supplierName ?? null,
-              leadTimeDays: pk.price?.leadTimeDays ?? null,
-              cost: pk.cost ? pk.cost.toString() : null,
-            })),
-          );
-        }
-      }
-      return estimate.id;
+      return writeEstimate(m, this.costing, {
+        companyId: user.companyId,
+        userId: user.id,
+        job,
+        buildUp,
+        airC: dto.airC ?? '20',
+        note: dto.note ?? null,
+        chosen: new Map<LineRole, string>((dto.materials ?? []).map((c) => [c.role, c.materialId])),
+      });
     });
     return this.respond(await this.bundle(user.companyId, id));
   }
@@ -209,11 +100,16 @@ export class EstimatesService {
   async list(user: AuthUser, jobId: string): Promise<EstimateSummaryResponse[]> {
     const job = await this.jobs.find(user.companyId, jobId);
     const rows: (Estimate & { creator: string | null })[] = (
-      await this.db.getRepository(Estimate).find({ where: { jobId: job.id, companyId: user.companyId }, order: { version: 'DESC' } })
+      await this.db
+        .getRepository(Estimate)
+        .find({ where: { jobId: job.id, companyId: user.companyId }, order: { version: 'DESC' } })
     ).map((e) => Object.assign(e, { creator: null as string | null }));
     const creators = [...new Set(rows.map((e) => e.createdBy).filter((x): x is string => !!x))];
     if (creators.length) {
-      const users: { id: string; name: string }[] = await this.db.query(`SELECT id, name FROM users WHERE id = ANY($1)`, [creators]);
+      const users: { id: string; name: string }[] = await this.db.query(
+        `SELECT id, name FROM users WHERE id = ANY($1)`,
+        [creators],
+      );
       rows.forEach((e) => (e.creator = users.find((u) => u.id === e.createdBy)?.name ?? null));
     }
     return rows.map((e) => ({
@@ -231,7 +127,11 @@ export class EstimatesService {
   }
 
   /** An estimate with its lines, materials and packs; 404 when the job or version is not the company's. */
-  async bundle(companyId: string, estimateId: string, m: EntityManager = this.db.manager): Promise<EstimateBundle> {
+  async bundle(
+    companyId: string,
+    estimateId: string,
+    m: EntityManager = this.db.manager,
+  ): Promise<EstimateBundle> {
     const estimate = await m.getRepository(Estimate).findOneBy({ id: estimateId, companyId });
     if (!estimate) {
       throw new NotFoundException('Estimate not found');
@@ -242,9 +142,16 @@ export class EstimatesService {
       m.getRepository(Job).findOneByOrFail({ id: estimate.jobId }),
     ]);
     const packs = materials.length
-      ? await m.getRepository(EstimatePack).find({ where: { estimateMaterialId: In(materials.map((x) => x.id)) }, order: { packSize: 'DESC' } })
+      ? await m
+          .getRepository(EstimatePack)
+          .find({
+            where: { estimateMaterialId: In(materials.map((x) => x.id)) },
+            order: { packSize: 'DESC' },
+          })
       : [];
-    const ids = [...new Set([...lines.map((l) => l.materialId), estimate.createdBy].filter((x): x is string => !!x))];
+    const ids = [
+      ...new Set([...lines.map((l) => l.materialId), estimate.createdBy].filter((x): x is string => !!x)),
+    ];
     const names = new Map<string, string>();
     if (ids.length) {
       const rows: { id: string; name: string }[] = await m.query(
@@ -256,13 +163,20 @@ export class EstimatesService {
     return {
       estimate,
       lines,
-      materials: materials.map((x) => Object.assign(x, { packs: packs.filter((p) => p.estimateMaterialId === x.id) })),
+      materials: materials.map((x) =>
+        Object.assign(x, { packs: packs.filter((p) => p.estimateMaterialId === x.id) }),
+      ),
       names,
       accepted: job.acceptedEstimateId === estimate.id,
     };
   }
 
-  async findVersion(companyId: string, jobId: string, version: number, m: EntityManager = this.db.manager): Promise<Estimate> {
+  async findVersion(
+    companyId: string,
+    jobId: string,
+    version: number,
+    m: EntityManager = this.db.manager,
+  ): Promise<Estimate> {
     const e = await m.getRepository(Estimate).findOneBy({ companyId, jobId, version });
     if (!e) {
       throw new NotFoundException(`Estimate version ${version} not found for this job`);
@@ -280,7 +194,12 @@ export class EstimatesService {
    * Makes a version the job's accepted estimate: the price of the quote and the basis for
    * reservations and the reconciliation. Refused while stock is reserved against another version.
    */
-  async accept(user: AuthUser, jobId: string, version: number, beforeAccept?: (m: EntityManager, job: Job, e: Estimate) => Promise<void>): Promise<EstimateResponse> {
+  async accept(
+    user: AuthUser,
+    jobId: string,
+    version: number,
+    beforeAccept?: (m: EntityManager, job: Job, e: Estimate) => Promise<void>,
+  ): Promise<EstimateResponse> {
     const id = await this.db.transaction(async (m) => {
       const job = await this.jobs.find(user.companyId, jobId, m, true);
       if (!ESTIMATING.includes(job.status)) {
@@ -314,7 +233,9 @@ export class EstimatesService {
         label: p.label,
         count: p.count,
         packPrice: p.packPrice === null ? null : new Decimal(p.packPrice).toFixed(2),
-        supplier: p.supplierId ? { id: p.supplierId, name: p.supplierName ?? '', leadTimeDays: p.leadTimeDays ?? 0 } : null,
+        supplier: p.supplierId
+          ? { id: p.supplierId, name: p.supplierName ?? '', leadTimeDays: p.leadTimeDays ?? 0 }
+          : null,
         cost: p.cost === null ? null : new Decimal(p.cost).toFixed(2),
       })),
       packTotal: plainOrNull(x.packTotal),
@@ -333,7 +254,13 @@ export class EstimatesService {
       createdAt: e.createdAt.toISOString(),
       createdBy: e.createdBy ? { id: e.createdBy, name: b.names.get(e.createdBy) ?? '' } : null,
       note: e.note,
-      buildUp: { id: e.buildUpId, name: e.buildUpName, labourRate: money(e.labourRate), markupPct: plain(e.markupPct), vatRatePct: plain(e.vatRatePct) },
+      buildUp: {
+        id: e.buildUpId,
+        name: e.buildUpName,
+        labourRate: money(e.labourRate),
+        markupPct: plain(e.markupPct),
+        vatRatePct: plain(e.vatRatePct),
+      },
       pricedOn: e.pricedOn,
       airC: plain(e.airC),
       catalystPercent: plain(e.catalystPct),
@@ -401,4 +328,162 @@ export class EstimatesService {
       cautions: cautionsFor(['base-resin', 'topcoat', 'catalyst', 'acetone']),
     };
   }
+}
+
+/** What writeEstimate needs: the job (with its roof) and the build-up, who and at what air temperature. */
+export interface EstimateInput {
+  companyId: string;
+  userId: string;
+  job: Job;
+  buildUp: BuildUp;
+  airC: string;
+  note: string | null;
+  chosen?: ReadonlyMap<LineRole, string>;
+}
+
+/**
+ * A new estimate version in the caller's transaction (the routes and the demo seed): the domain's
+ * estimateRoof, costed by CostingService, stored with its lines, materials and packs. The caller
+ * holds the job's row lock, so versions never collide.
+ */
+export async function writeEstimate(
+  m: EntityManager,
+  costing: CostingService,
+  input: EstimateInput,
+): Promise<string> {
+  const { companyId, userId, job, buildUp, airC, note } = input;
+  const chosen = input.chosen ?? new Map<LineRole, string>();
+  if (!job.roof) {
+    throw new RuleViolation('Measure the roof first: PUT /api/jobs/{id}/roof', 'no_roof');
+  }
+  let takeoff: Takeoff;
+  try {
+    takeoff = estimateRoof(toDomainRoof(job.roof, airC), toDomainBuildUp(buildUp.rates));
+  } catch (e) {
+    if (e instanceof DomainError) {
+      throw new RuleViolation(
+        e.message,
+        e.code === 'too-cold' ? 'too_cold' : 'invalid_roof',
+        HttpStatus.UNPROCESSABLE_ENTITY,
+      );
+    }
+    throw e;
+  }
+  const pricedOn = today();
+  const costed = await costing.costTakeoff(
+    companyId,
+    takeoff,
+    {
+      matGsm: buildUp.rates.matGsm,
+      rollWidthM: buildUp.rates.rollWidthM,
+      bandageWidthMm: buildUp.rates.bandageWidthMm,
+      bandageGsm: buildUp.rates.bandageGsm,
+      trimLengthM: buildUp.rates.trimLengthM,
+      topcoatColour: job.topcoatColour,
+    },
+    { labourRate: buildUp.labourRate, markupPct: buildUp.markupPct, vatRatePct: buildUp.vatRatePct },
+    pricedOn,
+    chosen,
+    m,
+  );
+  const [{ next }] = (await m.query(
+    `SELECT coalesce(max(version), 0) + 1 AS next FROM estimates WHERE job_id = $1`,
+    [job.id],
+  )) as [{ next: number }];
+  const p = costed.price;
+  const estimate = await m.getRepository(Estimate).save(
+    m.getRepository(Estimate).create({
+      companyId,
+      jobId: job.id,
+      version: next,
+      buildUpId: buildUp.id,
+      buildUpName: buildUp.name,
+      buildUp: {
+        rates: buildUp.rates,
+        labourRate: buildUp.labourRate,
+        markupPct: buildUp.markupPct,
+        vatRatePct: buildUp.vatRatePct,
+      },
+      roof: job.roof,
+      pricedOn,
+      airC: takeoff.airC.toString(),
+      catalystPct: takeoff.catalystPercent.toString(),
+      deckAreaM2: takeoff.deckAreaM2.toString(),
+      upstandAreaM2: takeoff.upstandAreaM2.toString(),
+      laminatedAreaM2: takeoff.laminatedAreaM2.toString(),
+      trimM: takeoff.trimM.toString(),
+      cornersExternal: takeoff.corners.external,
+      cornersInternal: takeoff.corners.internal,
+      cornersDerived: takeoff.corners.derived,
+      pipes: takeoff.pipes,
+      outlets: takeoff.outlets,
+      laminatingHours: takeoff.labour.laminatingHours.toString(),
+      trimHours: takeoff.labour.trimHours.toString(),
+      labourHours: takeoff.labour.totalHours.toString(),
+      labourRate: buildUp.labourRate,
+      materialCost: p.materialCost.toString(),
+      labourCost: p.labourCost.toString(),
+      markupPct: buildUp.markupPct,
+      markup: p.markup.toString(),
+      net: p.net.toString(),
+      vatRatePct: buildUp.vatRatePct,
+      vat: p.vat.toString(),
+      gross: p.gross.toString(),
+      unpriced: costed.unpriced,
+      cautions: takeoff.cautions,
+      note,
+      createdBy: userId,
+      acceptedAt: null,
+      acceptedBy: null,
+    }),
+  );
+  await m.getRepository(EstimateLine).insert(
+    takeoff.lines.map((l, i) => ({
+      companyId,
+      estimateId: estimate.id,
+      position: i + 1,
+      role: l.role,
+      materialKind: l.material,
+      description: l.description,
+      unit: l.unit,
+      quantity: l.quantity.toString(),
+      lengths: l.lengths ?? null,
+      metres: l.metres ? l.metres.toString() : null,
+      materialId: costed.lineMaterials.get(l.role)?.id ?? null,
+    })),
+  );
+  for (const [i, g] of costed.materials.entries()) {
+    const row = await m.getRepository(EstimateMaterial).save({
+      companyId,
+      estimateId: estimate.id,
+      position: i + 1,
+      roles: g.roles,
+      materialKind: g.materialKind,
+      materialId: g.material?.id ?? null,
+      materialName: g.material?.name ?? null,
+      stockUnit: g.unit,
+      quantity: g.quantity.toString(),
+      packTotal: g.packTotal ? g.packTotal.toString() : null,
+      leftover: g.leftover ? g.leftover.toString() : null,
+      cost: g.cost ? g.cost.toString() : null,
+      problem: g.problem,
+    });
+    if (g.packs.length > 0) {
+      await m.getRepository(EstimatePack).insert(
+        g.packs.map((pk) => ({
+          companyId,
+          estimateMaterialId: row.id,
+          packSize: pk.size.toString(),
+          label: pk.label,
+          count: pk.count,
+          packPrice: pk.price?.packPrice ?? null,
+          supplierId: pk.price?.supplierId ?? null,
+          supplierName: pk.price?.supplierName ?? null,
+          leadTimeDays: pk.price?.leadTimeDays ?? null,
+          cost: pk.cost ? pk.cost.toString() : null,
+        })),
+      );
+    }
+  }
+  return estimate.id;
 }

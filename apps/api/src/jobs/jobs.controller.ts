@@ -1,9 +1,33 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Put, Query } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Get,
+  HttpCode,
+  Param,
+  ParseUUIDPipe,
+  Patch,
+  Post,
+  Put,
+  Query,
+} from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { AuthUser, CurrentUser } from '../common/current-user';
 import { ANY_ROLE, Roles } from '../common/roles';
-import { CalendarQuery, ChangeStatusDto, CreateJobDto, ListJobsQuery, UpdateJobDto, UpdateSettingsDto } from './dto/job.dto';
-import { CalendarEntry, JobDetailResponse, JobPage, JobSettingsResponse, RoofResponse } from './dto/job-response';
+import {
+  CalendarQuery,
+  ChangeStatusDto,
+  CreateJobDto,
+  ListJobsQuery,
+  UpdateJobDto,
+  UpdateSettingsDto,
+} from './dto/job.dto';
+import {
+  CalendarEntry,
+  JobDetailResponse,
+  JobPage,
+  JobSettingsResponse,
+  RoofResponse,
+} from './dto/job-response';
 import { JobsService } from './jobs.service';
 import { ReservationsService } from './reservations/reservations.service';
 import { PutRoofDto } from './roof/roof.dto';
@@ -47,15 +71,25 @@ export class JobsController {
 
   @Patch('jobs/:id')
   @Roles('owner', 'estimator')
-  update(@CurrentUser() user: AuthUser, @Param('id', ID) id: string, @Body() dto: UpdateJobDto): Promise<JobDetailResponse> {
+  update(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ID) id: string,
+    @Body() dto: UpdateJobDto,
+  ): Promise<JobDetailResponse> {
     return this.jobs.update(user, id, dto);
   }
 
   @Post('jobs/:id/status')
   @HttpCode(200)
   @Roles('owner', 'estimator')
-  changeStatus(@CurrentUser() user: AuthUser, @Param('id', ID) id: string, @Body() dto: ChangeStatusDto): Promise<JobDetailResponse> {
-    return this.jobs.changeStatus(user, id, dto, (m, job) => this.reservations.onStatusChange(m, job));
+  changeStatus(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ID) id: string,
+    @Body() dto: ChangeStatusDto,
+  ): Promise<JobDetailResponse> {
+    return this.jobs.changeStatus(user, id, dto, (m, job) =>
+      this.reservations.onStatusChange(m, job, user.id),
+    );
   }
 
   @Get('jobs/:id/roof')
@@ -66,7 +100,11 @@ export class JobsController {
 
   @Put('jobs/:id/roof')
   @Roles('owner', 'estimator')
-  putRoof(@CurrentUser() user: AuthUser, @Param('id', ID) id: string, @Body() dto: PutRoofDto): Promise<RoofResponse> {
+  putRoof(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ID) id: string,
+    @Body() dto: PutRoofDto,
+  ): Promise<RoofResponse> {
     return this.jobs.putRoof(user, id, dto);
   }
 
@@ -78,7 +116,10 @@ export class JobsController {
 
   @Patch('settings/jobs')
   @Roles('owner')
-  updateSettings(@CurrentUser() user: AuthUser, @Body() dto: UpdateSettingsDto): Promise<JobSettingsResponse> {
+  updateSettings(
+    @CurrentUser() user: AuthUser,
+    @Body() dto: UpdateSettingsDto,
+  ): Promise<JobSettingsResponse> {
     return this.jobs.updateSettings(user, dto);
   }
 }

@@ -17,7 +17,10 @@ import { JobsController } from './jobs.controller';
 import { JobsService } from './jobs.service';
 import { MaterialStates } from './material-states';
 import { QuoteService } from './quote.service';
+import { ReservationsController } from './reservations/reservations.controller';
 import { ReservationsService } from './reservations/reservations.service';
+import { SiteStockService } from './reservations/site-stock.service';
+import { StockModule } from '../stock/stock.module';
 
 /**
  * Jobs: customers, jobs and their roofs, build-ups, estimates and quotes, reservations, issues and
@@ -25,14 +28,30 @@ import { ReservationsService } from './reservations/reservations.service';
  */
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Job, JobStatusChange, CompanySettings, Estimate, EstimateLine, EstimateMaterial, EstimatePack]),
+    TypeOrmModule.forFeature([
+      Job,
+      JobStatusChange,
+      CompanySettings,
+      Estimate,
+      EstimateLine,
+      EstimateMaterial,
+      EstimatePack,
+    ]),
     CompaniesModule,
     CustomersModule,
     BuildUpsModule,
     CostingModule,
+    StockModule,
   ],
-  controllers: [JobsController, EstimatesController],
-  providers: [JobsService, EstimatesService, QuoteService, MaterialStates, ReservationsService],
+  controllers: [JobsController, EstimatesController, ReservationsController],
+  providers: [
+    JobsService,
+    EstimatesService,
+    QuoteService,
+    MaterialStates,
+    ReservationsService,
+    SiteStockService,
+  ],
   exports: [JobsService],
 })
 export class JobsModule {}

@@ -7,7 +7,14 @@ import { BuildUpsService } from '../build-ups/build-ups.service';
 import type { AuthUser } from '../common/current-user';
 import { RuleViolation } from '../common/http-exception.filter';
 import { CustomersService } from '../customers/customers.service';
-import { CalendarQuery, ChangeStatusDto, CreateJobDto, ListJobsQuery, UpdateJobDto, UpdateSettingsDto } from './dto/job.dto';
+import {
+  CalendarQuery,
+  ChangeStatusDto,
+  CreateJobDto,
+  ListJobsQuery,
+  UpdateJobDto,
+  UpdateSettingsDto,
+} from './dto/job.dto';
 import {
   CalendarEntry,
   JobDetailResponse,
@@ -94,7 +101,9 @@ function toResponse(r: JobRow, state: MaterialState, money: boolean): JobRespons
     buildUp: r.build_up_id ? { id: r.build_up_id, name: r.build_up_name ?? '' } : null,
     hasRoof: r.has_roof,
     roofUpdatedAt: r.roof_updated_at ? r.roof_updated_at.toISOString() : null,
-    acceptedEstimate: r.accepted_estimate_id ? { id: r.accepted_estimate_id, version: r.accepted_version ?? 0 } : null,
+    acceptedEstimate: r.accepted_estimate_id
+      ? { id: r.accepted_estimate_id, version: r.accepted_version ?? 0 }
+      : null,
     materialState: state,
     notes: r.notes,
     createdAt: r.created_at.toISOString(),
@@ -117,7 +126,10 @@ export class JobsService {
 
   /** A job of the company, or 404; `lock` takes its row for the transaction. */
   async find(companyId: string, id: string, m: EntityManager = this.db.manager, lock = false): Promise<Job> {
-    const qb = m.getRepository(Job).createQueryBuilder('j').where('j.id = :id AND j.company_id = :companyId', { id, companyId });
+    const qb = m
+      .getRepository(Job)
+      .createQueryBuilder('j')
+      .where('j.id = :id AND j.company_id = :companyId', { id, companyId });
     if (lock) {
       qb.setLock('pessimistic_write');
     }
@@ -129,12 +141,19 @@ export class JobsService {
   }
 
   private async checkEstimator(m: EntityManager, companyId: string, userId: string): Promise<void> {
-    const rows: { role: string }[] = await m.query(`SELECT role FROM users WHERE id = $1 AND company_id = $2 AND active`, [userId, companyId]);
+    const rows: { role: string }[] = await m.query(
+      `SELECT role FROM users WHERE id = $1 AND company_id = $2 AND active`,
+      [userId, companyId],
+    );
     if (rows.length === 0) {
       throw new NotFoundException('Estimator not found: estimatorId must be an active user of this company');
     }
     if (rows[0]!.role === 'storeman') {
-      throw new RuleViolation('estimatorId: a job’s estimator must be an owner or an estimator, not a storeman', 'not_an_estimator', HttpStatus.UNPROCESSABLE_ENTITY);
+      throw new RuleViolation(
+        'estimatorId: a job’s estimator must be an owner or an estimator, not a storeman',
+        'not_an_estimator',
+        HttpStatus.UNPROCESSABLE_ENTITY,
+      );
     }
   }
 
@@ -144,15 +163,17 @@ export class JobsService {
       if (dto.buildUpId) {
         await this.buildUps.find(user.companyId, dto.buildUpId, m);
       }
-      const estimatorId = dto.estimatorId === undefined ? (user.role === 'storeman' ? null : user.id) : dto.estimatorId;
+      const estimatorId =
+        dto.estimatorId === undefined ? (user.role === 'storeman' ? null : user.id) : dto.estimatorId;
       if (estimatorId) {
         await this.checkEstimator(m, user.companyId, estimatorId);
       }
       // One job number at a time per company.
       await m.query(`SELECT pg_advisory_xact_lock(hashtext('potlife:job-number:' || $1))`, [user.companyId]);
-      const [{ next }] = (await m.query(`SELECT coalesce(max(number), 0) + 1 AS next FROM jobs WHERE company_id = $1`, [user.companyId])) as [
-        { next: number },
-      ];
+      const [{ next }] = (await m.query(
+        `SELECT coalesce(max(number), 0) + 1 AS next FROM jobs WHERE company_id = $1`,
+        [user.companyId],
+      )) as [{ next: number }];
       const title = dto.title ?? `Flat roof, ${dto.siteAddress.split(/[,\n]/)[0]!.trim()}`.slice(0, 160);
       const job = await m.getRepository(Job).save(
         m.getRepository(Job).create({
@@ -176,7 +197,16 @@ export class JobsService {
           createdBy: user.id,
         }),
       );
-      await m.getRepository(JobStatusChange).save({ companyId: user.companyId, jobId: job.id, fromStatus: null, toStatus: 'enquiry', reason: null, changedBy: user.id });
+      await m
+        .getRepository(JobStatusChange)
+        .save({
+          companyId: user.companyId,
+          jobId: job.id,
+          fromStatus: null,
+          toStatus: 'enquiry',
+          reason: null,
+          changedBy: user.id,
+        });
       return job.id;
     });
     return this.get(user, id);
@@ -192,10 +222,17 @@ export class JobsService {
       where.push(sql.replace('?', `$${params.length}`));
     };
     if (q.status) {
-      const statuses = q.status.split(',').map((s) => s.trim()).filter(Boolean);
+      const statuses = q.status
+        .split(',')
+        .map((s) => s.trim())
+        .filter(Boolean);
       const bad = statuses.filter((s) => !(JOB_STATUSES as readonly string[]).includes(s));
       if (bad.length > 0) {
-        throw new RuleViolation(`status: ${bad.join(', ')} is not a job status; use ${JOB_STATUSES.join(', ')}`, 'validation_failed', HttpStatus.BAD_REQUEST);
+        throw new RuleViolation(
+          `status: ${bad.join(', ')} is not a job status; use ${JOB_STATUSES.join(', ')}`,
+          'validation_failed',
+          HttpStatus.BAD_REQUEST,
+        );
       }
       add('j.status = ANY(?)', statuses);
     }
@@ -212,10 +249,16 @@ export class JobsService {
       const like = `%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
       params.push(like);
       const p = `$${params.length}`;
-      where.push(`(j.title ILIKE ${p} OR j.site_address ILIKE ${p} OR c.name ILIKE ${p} OR ('J-' || lpad(j.number::text, 4, '0')) ILIKE ${p})`);
+      where.push(
+        `(j.title ILIKE ${p} OR j.site_address ILIKE ${p} OR c.name ILIKE ${p} OR ('J-' || lpad(j.number::text, 4, '0')) ILIKE ${p})`,
+      );
     }
     if (q.sort?.replace('-', '') === 'value' && !seesMoney(user)) {
-      throw new RuleViolation('sort: a storeman cannot sort by value', 'validation_failed', HttpStatus.BAD_REQUEST);
+      throw new RuleViolation(
+        'sort: a storeman cannot sort by value',
+        'validation_failed',
+        HttpStatus.BAD_REQUEST,
+      );
     }
     const sort = q.sort ?? '-number';
     const desc = sort.startsWith('-');
@@ -231,25 +274,37 @@ export class JobsService {
       params,
     );
     const states = await this.materialStates.of(this.db.manager, user.companyId, rows);
-    return { items: rows.map((r) => toResponse(r, states.get(r.id)?.state ?? 'no-estimate', seesMoney(user))), total, page, pageSize };
+    return {
+      items: rows.map((r) => toResponse(r, states.get(r.id)?.state ?? 'no-estimate', seesMoney(user))),
+      total,
+      page,
+      pageSize,
+    };
   }
 
   async get(user: AuthUser, id: string): Promise<JobDetailResponse> {
-    const rows: (JobRow & { contact_name: string | null; phone: string | null; email: string | null })[] = await this.db.query(
-      `${SELECT_JOBS.replace('c.name AS customer_name,', 'c.name AS customer_name, c.contact_name, c.phone, c.email,')} WHERE j.id = $1 AND j.company_id = $2`,
-      [id, user.companyId],
-    );
+    const rows: (JobRow & { contact_name: string | null; phone: string | null; email: string | null })[] =
+      await this.db.query(
+        `${SELECT_JOBS.replace('c.name AS customer_name,', 'c.name AS customer_name, c.contact_name, c.phone, c.email,')} WHERE j.id = $1 AND j.company_id = $2`,
+        [id, user.companyId],
+      );
     const r = rows[0];
     if (!r) {
       throw new NotFoundException('Job not found');
     }
-    const history: { from_status: JobStatus | null; to_status: JobStatus; reason: string | null; changed_by: string | null; name: string | null; changed_at: Date }[] =
-      await this.db.query(
-        `SELECT h.from_status, h.to_status, h.reason, h.changed_by, u.name, h.changed_at
+    const history: {
+      from_status: JobStatus | null;
+      to_status: JobStatus;
+      reason: string | null;
+      changed_by: string | null;
+      name: string | null;
+      changed_at: Date;
+    }[] = await this.db.query(
+      `SELECT h.from_status, h.to_status, h.reason, h.changed_by, u.name, h.changed_at
            FROM job_status_changes h LEFT JOIN users u ON u.id = h.changed_by
           WHERE h.job_id = $1 AND h.company_id = $2 ORDER BY h.changed_at, h.id`,
-        [id, user.companyId],
-      );
+      [id, user.companyId],
+    );
     const states = await this.materialStates.of(this.db.manager, user.companyId, [r]);
     return {
       ...toResponse(r, states.get(r.id)?.state ?? 'no-estimate', seesMoney(user)),
@@ -278,14 +333,24 @@ export class JobsService {
         await this.checkEstimator(m, user.companyId, dto.estimatorId);
       }
       if (dto.scheduledOn === null && job.status === 'scheduled') {
-        throw new RuleViolation('A scheduled job needs its date: move it back to won before clearing the date', 'job_needs_date');
+        throw new RuleViolation(
+          'A scheduled job needs its date: move it back to won before clearing the date',
+          'job_needs_date',
+        );
       }
       for (const key of ['title', 'siteAddress', 'substrate'] as const) {
         if (dto[key] !== undefined) {
           (job as unknown as Record<string, unknown>)[key] = dto[key];
         }
       }
-      for (const key of ['scheduledOn', 'estimatorId', 'crew', 'topcoatColour', 'buildUpId', 'notes'] as const) {
+      for (const key of [
+        'scheduledOn',
+        'estimatorId',
+        'crew',
+        'topcoatColour',
+        'buildUpId',
+        'notes',
+      ] as const) {
         if (dto[key] !== undefined) {
           (job as unknown as Record<string, unknown>)[key] = dto[key] ?? null;
         }
@@ -299,7 +364,12 @@ export class JobsService {
    * Moves a job along its status machine (domain checkJobTransition): an illegal move answers 409
    * naming both states and the allowed next ones. Lost or cancelled releases its reservations.
    */
-  async changeStatus(user: AuthUser, id: string, dto: ChangeStatusDto, onLeave?: (m: EntityManager, job: Job) => Promise<void>): Promise<JobDetailResponse> {
+  async changeStatus(
+    user: AuthUser,
+    id: string,
+    dto: ChangeStatusDto,
+    onLeave?: (m: EntityManager, job: Job) => Promise<void>,
+  ): Promise<JobDetailResponse> {
     await this.db.transaction(async (m) => {
       const job = await this.find(user.companyId, id, m, true);
       try {
@@ -374,7 +444,11 @@ export class JobsService {
     }
     const days = (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000;
     if (days > 400) {
-      throw new RuleViolation('to: a calendar spans at most 400 days', 'validation_failed', HttpStatus.BAD_REQUEST);
+      throw new RuleViolation(
+        'to: a calendar spans at most 400 days',
+        'validation_failed',
+        HttpStatus.BAD_REQUEST,
+      );
     }
     const rows: JobRow[] = await this.db.query(
       `${SELECT_JOBS} WHERE j.company_id = $1 AND j.scheduled_on BETWEEN $2 AND $3 AND j.status NOT IN ('lost', 'cancelled')
@@ -396,11 +470,8 @@ export class JobsService {
     }));
   }
 
-  async settings(companyId: string, m: EntityManager = this.db.manager): Promise<JobSettingsResponse> {
-    const s = await m.getRepository(CompanySettings).findOneBy({ companyId });
-    return s
-      ? { reservationMarginDays: s.reservationMarginDays, quoteValidityDays: s.quoteValidityDays, updatedAt: s.updatedAt.toISOString() }
-      : { ...DEFAULT_SETTINGS, updatedAt: null };
+  settings(companyId: string, m: EntityManager = this.db.manager): Promise<JobSettingsResponse> {
+    return readJobSettings(m, companyId);
   }
 
   async updateSettings(user: AuthUser, dto: UpdateSettingsDto): Promise<JobSettingsResponse> {
@@ -409,8 +480,25 @@ export class JobsService {
       `INSERT INTO company_settings (company_id, reservation_margin_days, quote_validity_days, updated_by, updated_at)
        VALUES ($1, $2, $3, $4, now())
        ON CONFLICT (company_id) DO UPDATE SET reservation_margin_days = $2, quote_validity_days = $3, updated_by = $4, updated_at = now()`,
-      [user.companyId, dto.reservationMarginDays ?? current.reservationMarginDays, dto.quoteValidityDays ?? current.quoteValidityDays, user.id],
+      [
+        user.companyId,
+        dto.reservationMarginDays ?? current.reservationMarginDays,
+        dto.quoteValidityDays ?? current.quoteValidityDays,
+        user.id,
+      ],
     );
     return this.settings(user.companyId);
   }
+}
+
+/** The owner's job settings, or the defaults when none are saved. */
+export async function readJobSettings(m: EntityManager, companyId: string): Promise<JobSettingsResponse> {
+  const s = await m.getRepository(CompanySettings).findOneBy({ companyId });
+  return s
+    ? {
+        reservationMarginDays: s.reservationMarginDays,
+        quoteValidityDays: s.quoteValidityDays,
+        updatedAt: s.updatedAt.toISOString(),
+      }
+    : { ...DEFAULT_SETTINGS, updatedAt: null };
 }

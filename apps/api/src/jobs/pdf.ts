@@ -21,7 +21,11 @@ function manrope(): { regular: string; bold: string } | null {
 
 /** An A4 document with the body and bold fonts registered as "body" and "bold". */
 export function newPdf(title: string): Pdf {
-  const doc = new PDFDocument({ size: 'A4', margin: 50, info: { Title: title, Producer: 'Potlife', Creator: 'Potlife' } });
+  const doc = new PDFDocument({
+    size: 'A4',
+    margin: 50,
+    info: { Title: title, Producer: 'Potlife', Creator: 'Potlife' },
+  });
   const f = manrope();
   if (f) {
     doc.registerFont('body', f.regular);
@@ -47,11 +51,24 @@ export function pdfBuffer(doc: Pdf): Promise<Buffer> {
 
 /** A heading in bold, then back to the body font. */
 export function heading(doc: Pdf, text: string, size = 13): void {
-  doc.moveDown(0.8).font('bold').fontSize(size).fillColor('#1d2b36').text(text).font('body').fontSize(10).fillColor('#222222').moveDown(0.3);
+  doc
+    .moveDown(0.8)
+    .font('bold')
+    .fontSize(size)
+    .fillColor('#1d2b36')
+    .text(text)
+    .font('body')
+    .fontSize(10)
+    .fillColor('#222222')
+    .moveDown(0.3);
 }
 
 /** The trade's cautions, each title in bold with its text. */
-export function cautionsBlock(doc: Pdf, cautions: readonly { title: string; text: string }[], intro: string): void {
+export function cautionsBlock(
+  doc: Pdf,
+  cautions: readonly { title: string; text: string }[],
+  intro: string,
+): void {
   heading(doc, 'Safety');
   doc.fontSize(9).text(intro).moveDown(0.4);
   for (const c of cautions) {

@@ -3,9 +3,21 @@ import type { EstimateResponse } from './dto/estimate.dto';
 import { cautionsBlock, heading, newPdf, pdfBuffer, pounds } from './pdf';
 
 export interface QuoteData {
-  company: { name: string; address: string | null; phone: string | null; email: string | null; vatNumber: string | null };
+  company: {
+    name: string;
+    address: string | null;
+    phone: string | null;
+    email: string | null;
+    vatNumber: string | null;
+  };
   customer: { name: string; contactName: string | null; billingAddress: string | null };
-  job: { reference: string; title: string; siteAddress: string; substrate: string; topcoatColour: string | null };
+  job: {
+    reference: string;
+    title: string;
+    siteAddress: string;
+    substrate: string;
+    topcoatColour: string | null;
+  };
   estimate: EstimateResponse;
   layers: string;
   matGsm: string;
@@ -34,7 +46,9 @@ export function scopeOfWork(d: QuoteData): string[] {
     `Prepare the ${SUBSTRATE_WORDS[d.job.substrate] ?? d.job.substrate} (${m(e.deckAreaM2)} m²) so it is sound, dry and clean, and fix timber battens at the edges.`,
   ];
   if (trims.length) {
-    scope.push(`Fix pre-formed GRP edge trims: ${trims.join(', ')}, with joints and corners dressed in glass bandage.`);
+    scope.push(
+      `Fix pre-formed GRP edge trims: ${trims.join(', ')}, with joints and corners dressed in glass bandage.`,
+    );
   }
   const layers = new Decimal(d.layers);
   scope.push(
@@ -65,7 +79,12 @@ export async function renderQuote(d: QuoteData): Promise<Buffer> {
   const e = d.estimate;
   doc.font('bold').fontSize(18).fillColor('#1d2b36').text(d.company.name);
   doc.font('body').fontSize(9).fillColor('#444444');
-  for (const line of [d.company.address, d.company.phone, d.company.email, d.company.vatNumber ? `VAT ${d.company.vatNumber}` : null]) {
+  for (const line of [
+    d.company.address,
+    d.company.phone,
+    d.company.email,
+    d.company.vatNumber ? `VAT ${d.company.vatNumber}` : null,
+  ]) {
     if (line) {
       doc.text(line);
     }
@@ -95,13 +114,18 @@ export async function renderQuote(d: QuoteData): Promise<Buffer> {
   ];
   for (const [label, value] of rows) {
     const y = doc.y;
-    doc.font(label === 'Total' ? 'bold' : 'body').text(label, 50, y).text(value, 350, y, { width: 195, align: 'right' });
+    doc
+      .font(label === 'Total' ? 'bold' : 'body')
+      .text(label, 50, y)
+      .text(value, 350, y, { width: 195, align: 'right' });
   }
   doc.font('body').moveDown(0.5);
-  doc.fontSize(9).text(
-    `This quote holds until ${d.validUntil}. Work is laid only in fit weather (dry, at least 5 °C, the deck above the dew point); a day lost to the weather moves the date, not the price.`,
-    50,
-  );
+  doc
+    .fontSize(9)
+    .text(
+      `This quote holds until ${d.validUntil}. Work is laid only in fit weather (dry, at least 5 °C, the deck above the dew point); a day lost to the weather moves the date, not the price.`,
+      50,
+    );
   cautionsBlock(
     doc,
     e.cautions,

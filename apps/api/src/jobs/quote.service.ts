@@ -33,9 +33,25 @@ export class QuoteService {
     const issued = dayjs(e.createdAt);
     const reference = jobReference(job.number);
     const pdf = await renderQuote({
-      company: { name: company.name, address: company.address, phone: company.phone, email: company.email, vatNumber: company.vatNumber },
-      customer: { name: customer.name, contactName: customer.contactName, billingAddress: customer.billingAddress },
-      job: { reference, title: job.title, siteAddress: job.siteAddress, substrate: job.substrate, topcoatColour: job.topcoatColour },
+      company: {
+        name: company.name,
+        address: company.address,
+        phone: company.phone,
+        email: company.email,
+        vatNumber: company.vatNumber,
+      },
+      customer: {
+        name: customer.name,
+        contactName: customer.contactName,
+        billingAddress: customer.billingAddress,
+      },
+      job: {
+        reference,
+        title: job.title,
+        siteAddress: job.siteAddress,
+        substrate: job.substrate,
+        topcoatColour: job.topcoatColour,
+      },
       estimate: this.estimates.respond(bundle),
       layers: e.buildUp.rates.layers,
       matGsm: e.buildUp.rates.matGsm,

@@ -29,4 +29,12 @@ export const JOBS_ROUTES: Record<string, Role[] | 'public'> = {
   'POST /api/jobs/{id}/estimates/{n}/accept': EDITORS,
   'GET /api/jobs/{id}/estimates/{n}/quote.pdf': EDITORS,
   'POST /api/laying-check': ALL,
+  'GET /api/jobs/{id}/reservations': ALL,
+  'POST /api/jobs/{id}/reservations': EDITORS,
+  'DELETE /api/jobs/{id}/reservations': EDITORS,
+  'GET /api/jobs/{id}/pick-list': ALL,
+  'GET /api/jobs/{id}/pick-list.pdf': ALL,
+  'POST /api/jobs/{id}/issues': ['owner', 'storeman'],
+  'POST /api/jobs/{id}/returns': ['owner', 'storeman'],
+  'GET /api/jobs/{id}/reconciliation': EDITORS,
 };

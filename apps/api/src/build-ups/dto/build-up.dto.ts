@@ -68,16 +68,24 @@ function IsEdgeRates(): PropertyDecorator {
         typeof value === 'object' &&
         !Array.isArray(value) &&
         Object.entries(value as Record<string, unknown>).every(
-          ([k, v]) => (EDGE_KINDS as readonly string[]).includes(k) && isDecimalWithin(typeof v === 'number' ? String(v) : v, NON_NEGATIVE),
+          ([k, v]) =>
+            (EDGE_KINDS as readonly string[]).includes(k) &&
+            isDecimalWithin(typeof v === 'number' ? String(v) : v, NON_NEGATIVE),
         ),
-      defaultMessage: () => 'must be an object of drip, kerb, wall and angle, each a decimal number at least 0',
+      defaultMessage: () =>
+        'must be an object of drip, kerb, wall and angle, each a decimal number at least 0',
     },
   });
 }
 
 const edgeRatesToStrings = ({ value }: { value: unknown }) =>
   value && typeof value === 'object' && !Array.isArray(value)
-    ? Object.fromEntries(Object.entries(value as Record<string, unknown>).map(([k, v]) => [k, typeof v === 'number' ? String(v) : v]))
+    ? Object.fromEntries(
+        Object.entries(value as Record<string, unknown>).map(([k, v]) => [
+          k,
+          typeof v === 'number' ? String(v) : v,
+        ]),
+      )
     : value;
 
 /** Every rate, optional: left out on create means the domain default (DEFAULT_BUILD_UP). */
@@ -116,13 +124,19 @@ export class BuildUpRatesDto {
   @Type(() => CatalystBandDto)
   catalystBands?: CatalystBandDto[];
 
-  @ApiPropertyOptional({ example: { drip: '2', kerb: '1', wall: '0', angle: '0' }, description: 'batten m per m of edge' })
+  @ApiPropertyOptional({
+    example: { drip: '2', kerb: '1', wall: '0', angle: '0' },
+    description: 'batten m per m of edge',
+  })
   @IsOptional()
   @Transform(edgeRatesToStrings)
   @IsEdgeRates()
   battenMPerEdgeM?: Partial<Record<EdgeKind, string>>;
 
-  @ApiPropertyOptional({ example: { drip: '5', kerb: '5', wall: '5', angle: '0' }, description: 'clout nails per m of edge' })
+  @ApiPropertyOptional({
+    example: { drip: '5', kerb: '5', wall: '5', angle: '0' },
+    description: 'clout nails per m of edge',
+  })
   @IsOptional()
   @Transform(edgeRatesToStrings)
   @IsEdgeRates()

@@ -169,7 +169,9 @@ export class Jobs1764604000000 implements MigrationInterface {
         cost numeric(14,2),
         problem text
       )`);
-    await q.query(`CREATE INDEX estimate_materials_estimate_idx ON estimate_materials (estimate_id, position)`);
+    await q.query(
+      `CREATE INDEX estimate_materials_estimate_idx ON estimate_materials (estimate_id, position)`,
+    );
     await q.query(`
       CREATE TABLE estimate_packs (
         id uuid PRIMARY KEY DEFAULT gen_random_uuid(),

@@ -1,7 +1,17 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import type { Caution, LineRole, MaterialKind, Unit } from '@potlife/domain';
 import { Transform, Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsOptional, IsString, IsUUID, MaxLength, ValidateNested } from 'class-validator';
+import {
+  ArrayMaxSize,
+  IsArray,
+  IsBoolean,
+  IsIn,
+  IsOptional,
+  IsString,
+  IsUUID,
+  MaxLength,
+  ValidateNested,
+} from 'class-validator';
 import { IsDecimalValue, trimToNull } from '../../costing/validation';
 
 export const LINE_ROLES: readonly LineRole[] = [
@@ -40,12 +50,18 @@ export class CreateEstimateDto {
   @IsUUID('all', { message: 'must be the id of a build-up' })
   buildUpId?: string;
 
-  @ApiPropertyOptional({ example: '12', description: 'expected air temperature on the day, °C, for the catalyst dose (default 20)' })
+  @ApiPropertyOptional({
+    example: '12',
+    description: 'expected air temperature on the day, °C, for the catalyst dose (default 20)',
+  })
   @IsOptional()
   @IsDecimalValue({ min: -30, max: 50 })
   airC?: string;
 
-  @ApiPropertyOptional({ type: [MaterialChoiceDto], description: 'a material for a role instead of the best fit' })
+  @ApiPropertyOptional({
+    type: [MaterialChoiceDto],
+    description: 'a material for a role instead of the best fit',
+  })
   @IsOptional()
   @IsArray()
   @ArrayMaxSize(LINE_ROLES.length)
@@ -143,7 +159,16 @@ export interface EstimateResponse {
   lines: EstimateLineResponse[];
   materials: EstimateMaterialResponse[];
   labour: { laminatingHours: string; trimHours: string; totalHours: string; rate: string; cost: string };
-  price: { materialCost: string; labourCost: string; markupPct: string; markup: string; net: string; vatRatePct: string; vat: string; gross: string };
+  price: {
+    materialCost: string;
+    labourCost: string;
+    markupPct: string;
+    markup: string;
+    net: string;
+    vatRatePct: string;
+    vat: string;
+    gross: string;
+  };
   /** materials without a price, left out of materialCost */
   unpriced: number;
   /** every material's problem, in order */

@@ -10,7 +10,10 @@ export class CreateJobDto {
   @IsUUID('all', { message: 'must be the id of a customer' })
   customerId: string;
 
-  @ApiPropertyOptional({ example: 'Rear extension flat roof', description: 'defaults to “Flat roof” and the first line of the site address' })
+  @ApiPropertyOptional({
+    example: 'Rear extension flat roof',
+    description: 'defaults to “Flat roof” and the first line of the site address',
+  })
   @IsOptional()
   @Transform(trimToNull)
   @IsString()
@@ -33,7 +36,11 @@ export class CreateJobDto {
   @IsIsoDate()
   scheduledOn?: string | null;
 
-  @ApiPropertyOptional({ format: 'uuid', nullable: true, description: 'an owner or estimator of the company; defaults to the caller' })
+  @ApiPropertyOptional({
+    format: 'uuid',
+    nullable: true,
+    description: 'an owner or estimator of the company; defaults to the caller',
+  })
   @IsOptional()
   @IsUUID('all', { message: 'must be the id of a user' })
   estimatorId?: string | null;
@@ -142,7 +149,19 @@ export class ChangeStatusDto {
   reason?: string | null;
 }
 
-export const JOB_SORTS = ['number', '-number', 'scheduledOn', '-scheduledOn', 'createdAt', '-createdAt', 'value', '-value', 'status', 'customer', '-customer'] as const;
+export const JOB_SORTS = [
+  'number',
+  '-number',
+  'scheduledOn',
+  '-scheduledOn',
+  'createdAt',
+  '-createdAt',
+  'value',
+  '-value',
+  'status',
+  'customer',
+  '-customer',
+] as const;
 export type JobSort = (typeof JOB_SORTS)[number];
 
 export class ListJobsQuery {
@@ -206,7 +225,10 @@ export class CalendarQuery {
 }
 
 export class UpdateSettingsDto {
-  @ApiPropertyOptional({ example: 7, description: 'reserved stock must still be in date this many days after the job date' })
+  @ApiPropertyOptional({
+    example: 7,
+    description: 'reserved stock must still be in date this many days after the job date',
+  })
   @IsOptional()
   @IsInt()
   @Min(0)

@@ -22,7 +22,14 @@ export class EstimatePack {
   @Column({ type: 'int' })
   count: number;
 
-  @Column({ name: 'pack_price', type: 'numeric', precision: 14, scale: 2, nullable: true, transformer: decimalString })
+  @Column({
+    name: 'pack_price',
+    type: 'numeric',
+    precision: 14,
+    scale: 2,
+    nullable: true,
+    transformer: decimalString,
+  })
   packPrice: string | null;
 
   @Column({ name: 'supplier_id', type: 'uuid', nullable: true })

@@ -1,14 +1,526 @@
 import { Injectable } from '@nestjs/common';
-import { EntityManager } from 'typeorm';
+import { InjectDataSource } from '@nestjs/typeorm';
+import {
+  allocateFefo,
+  Decimal,
+  FefoLot,
+  jobHoldsStock,
+  lotUsableOn,
+  shortfallToOrder,
+} from '@potlife/domain';
+import dayjs from 'dayjs';
+import { DataSource, EntityManager } from 'typeorm';
+import type { AuthUser } from '../../common/current-user';
+import { RuleViolation } from '../../common/http-exception.filter';
+import { CostingService } from '../../costing/costing.service';
+import { StockService } from '../../stock/stock.service';
 import type { Estimate } from '../entities/estimate.entity';
-import type { Job } from '../entities/job.entity';
+import { Job, jobReference } from '../entities/job.entity';
+import { JobsService, readJobSettings } from '../jobs.service';
+import { ReservationFlagCode, ReservationMaterialResponse, ReservationsResponse } from './reservation.dto';
 
-/** Stock held for a job's date. */
+/** A job may hold stock for its date from quoted until the crew has finished. */
+export const RESERVABLE: readonly string[] = ['quoted', 'won', 'scheduled', 'in-progress'];
+
+const ZERO = new Decimal(0);
+/** Lots hold quantities to 3 decimal places; a need is rounded up to them. */
+const LOT_PLACES = 3;
+const fmt = (d: Decimal) => d.toDecimalPlaces(LOT_PLACES).toString();
+const addDays = (date: string, days: number) => dayjs(date).add(days, 'day').format('YYYY-MM-DD');
+
+/** What the accepted estimate asks of one material. */
+export interface NeededMaterial {
+  materialId: string;
+  code: string;
+  name: string;
+  kind: string;
+  unit: string;
+  needed: Decimal;
+  packSizes: { size: string; label: string }[];
+  reorderQuantity: string;
+  leadTimeDays: number | null;
+  supplier: { id: string; name: string } | null;
+}
+
+interface HeldRow {
+  id: string;
+  materialId: string;
+  lotId: string;
+  estimateId: string;
+  quantity: string;
+  issuedQuantity: string;
+  status: 'held' | 'issued';
+  createdAt: Date;
+  batchNumber: string | null;
+  expiresOn: string | null;
+  lotStatus: string;
+  exposureFlagged: boolean;
+  lotQuantity: string;
+}
+
+/**
+ * Stock held for a job's date. Every reservation locks the lots of each material (in material,
+ * then lot id order, through StockService.lockLotsForMaterial) for the whole transaction, reads
+ * what other jobs hold after the lock is granted, then allocates with the domain's allocateFefo:
+ * two estimators reserving the last drum at once are served one after the other.
+ */
 @Injectable()
 export class ReservationsService {
-  /** Called inside the status change's transaction. */
-  async onStatusChange(_m: EntityManager, _job: Job): Promise<void> {}
+  constructor(
+    @InjectDataSource() private readonly db: DataSource,
+    private readonly jobs: JobsService,
+    private readonly stock: StockService,
+    private readonly costing: CostingService,
+  ) {}
 
-  /** Called inside the acceptance's transaction, before the estimate becomes the accepted one. */
-  async beforeAccept(_m: EntityManager, _job: Job, _e: Estimate): Promise<void> {}
+  /** The materials of an estimate that can be reserved, with their packs in the stock unit; and those that cannot. */
+  async neededFor(
+    m: EntityManager,
+    companyId: string,
+    estimateId: string,
+  ): Promise<{ needed: NeededMaterial[]; skipped: ReservationsResponse['skipped'] }> {
+    const rows: {
+      materialId: string | null;
+      roles: string[];
+      materialKind: string;
+      packTotal: string | null;
+      problem: string | null;
+      code: string | null;
+      name: string | null;
+      unit: string | null;
+      packSizes: { size: string; label: string }[] | null;
+      reorderQuantity: string | null;
+      leadTimeDays: number | null;
+      supplierId: string | null;
+      supplierName: string | null;
+    }[] = await m.query(
+      `SELECT em.material_id AS "materialId", em.roles, em.material_kind AS "materialKind", em.pack_total::text AS "packTotal", em.problem,
+              mt.code, mt.name, mt.stock_unit AS unit, mt.pack_sizes AS "packSizes", mt.reorder_quantity::text AS "reorderQuantity",
+              p.lead_time_days AS "leadTimeDays", p.supplier_id AS "supplierId", p.supplier_name AS "supplierName"
+         FROM estimate_materials em
+         LEFT JOIN materials mt ON mt.id = em.material_id
+         LEFT JOIN LATERAL (SELECT lead_time_days, supplier_id, supplier_name FROM estimate_packs
+                             WHERE estimate_material_id = em.id AND supplier_id IS NOT NULL
+                             ORDER BY lead_time_days DESC NULLS LAST LIMIT 1) p ON true
+        WHERE em.estimate_id = $1 AND em.company_id = $2
+        ORDER BY em.position`,
+      [estimateId, companyId],
+    );
+    const needed: NeededMaterial[] = [];
+    const skipped: ReservationsResponse['skipped'] = [];
+    for (const r of rows) {
+      if (!r.materialId || !r.name) {
+        skipped.push({
+          roles: r.roles,
+          materialKind: r.materialKind,
+          reason: r.problem ?? 'No catalogue material for this line.',
+        });
+      } else if (!r.packTotal || new Decimal(r.packTotal).isZero()) {
+        skipped.push({
+          roles: r.roles,
+          materialKind: r.materialKind,
+          reason: r.problem ?? `${r.name}: nothing to reserve.`,
+        });
+      } else {
+        needed.push({
+          materialId: r.materialId,
+          code: r.code ?? '',
+          name: r.name,
+          kind: r.materialKind,
+          unit: r.unit ?? '',
+          needed: new Decimal(r.packTotal).toDecimalPlaces(LOT_PLACES, Decimal.ROUND_UP),
+          packSizes: r.packSizes ?? [],
+          reorderQuantity: r.reorderQuantity ?? '0',
+          leadTimeDays: r.leadTimeDays,
+          supplier: r.supplierId ? { id: r.supplierId, name: r.supplierName ?? '' } : null,
+        });
+      }
+    }
+    // Unpriced materials have no supplier on their packs: the cheapest current supplier's lead time then.
+    const unknown = needed.filter((n) => n.leadTimeDays === null);
+    if (unknown.length) {
+      const prices = await this.costing.currentPrices(
+        companyId,
+        unknown.map((n) => n.materialId),
+        dayjs().format('YYYY-MM-DD'),
+        m,
+      );
+      for (const n of unknown) {
+        const p = [...prices.entries()].find(([k]) => k.startsWith(`${n.materialId}|`))?.[1];
+        if (p) {
+          n.leadTimeDays = p.leadTimeDays;
+          n.supplier = { id: p.supplierId, name: p.supplierName };
+        }
+      }
+    }
+    return { needed, skipped };
+  }
+
+  /** Issued less returned, per material, for a job (from the ledger). */
+  async netOut(m: EntityManager, companyId: string, jobId: string): Promise<Map<string, Decimal>> {
+    const rows: { materialId: string; out: string }[] = await m.query(
+      `SELECT material_id AS "materialId", (-sum(quantity))::text AS out FROM stock_movements
+        WHERE company_id = $1 AND job_id = $2 AND kind IN ('issue', 'return') GROUP BY material_id`,
+      [companyId, jobId],
+    );
+    return new Map(rows.map((r) => [r.materialId, new Decimal(r.out)]));
+  }
+
+  private async settings(m: EntityManager, companyId: string): Promise<number> {
+    return (await readJobSettings(m, companyId)).reservationMarginDays;
+  }
+
+  /**
+   * Reserves the accepted estimate's packs for the job date: for each material, what is still
+   * needed (packs − held − already out on the job) by allocateFefo from lots that are available,
+   * not exposure-flagged, and in date on the job date + the owner's margin, less what other jobs
+   * hold. What cannot be found is the shortfall, needed by the job date less the supplier's lead time.
+   */
+  async reserve(user: AuthUser, jobId: string): Promise<ReservationsResponse> {
+    await this.db.transaction(async (m) =>
+      this.reserveIn(m, user, await this.jobs.find(user.companyId, jobId, m, true)),
+    );
+    return this.view(user.companyId, jobId);
+  }
+
+  /** The reservation in the caller's transaction, the job's row already locked (the route, the demo seed). */
+  async reserveIn(m: EntityManager, user: Pick<AuthUser, 'companyId' | 'id'>, job: Job): Promise<void> {
+    if (!RESERVABLE.includes(job.status)) {
+      throw new RuleViolation(
+        `A ${job.status} job cannot hold stock: reservations are for jobs from quoted to in-progress`,
+        'job_cannot_reserve',
+      );
+    }
+    if (!job.scheduledOn) {
+      throw new RuleViolation(
+        'Give the job a scheduled date first: stock is reserved for the job date',
+        'job_needs_date',
+      );
+    }
+    if (!job.acceptedEstimateId) {
+      throw new RuleViolation(
+        'Accept an estimate first: its packs are what is reserved',
+        'no_accepted_estimate',
+      );
+    }
+    const margin = await this.settings(m, user.companyId);
+    const useBy = addDays(job.scheduledOn, margin);
+    const { needed } = await this.neededFor(m, user.companyId, job.acceptedEstimateId);
+    const out = await this.netOut(m, user.companyId, job.id);
+    await m.query(`DELETE FROM reservation_shortfalls WHERE job_id = $1`, [job.id]);
+    for (const n of [...needed].sort((a, b) => a.materialId.localeCompare(b.materialId))) {
+      const lots = await this.stock.lockLotsForMaterial(m, user.companyId, n.materialId);
+      // Holds of this job that no longer fit the job date (lot expired for it, quarantined,
+      // flagged, gone) are let go and found again.
+      const mineRows: { id: string; lotId: string; held: string }[] = await m.query(
+        `SELECT id, lot_id AS "lotId", (quantity - issued_quantity)::text AS held FROM reservations
+          WHERE job_id = $1 AND material_id = $2 AND status = 'held' ORDER BY id FOR UPDATE`,
+        [job.id, n.materialId],
+      );
+      const stale = mineRows.filter((r) => {
+        const lot = lots.find((l) => l.id === r.lotId);
+        return (
+          !lot ||
+          lot.status !== 'available' ||
+          lot.exposureFlagged ||
+          new Decimal(r.held).gt(lot.quantity) ||
+          !lotUsableOn({ expiresOn: lot.fefoExpiresOn, usable: true }, job.scheduledOn as string, margin)
+        );
+      });
+      if (stale.length) {
+        await m.query(
+          `UPDATE reservations SET status = 'released', released_at = now(), released_by = $2,
+                  release_reason = 'No longer usable for the job date: reserved again' WHERE id = ANY($1)`,
+          [stale.map((r) => r.id), user.id],
+        );
+      }
+      const held: { lotId: string; jobId: string; held: string }[] = lots.length
+        ? await m.query(
+            `SELECT lot_id AS "lotId", job_id AS "jobId", sum(quantity - issued_quantity)::text AS held FROM reservations
+              WHERE status = 'held' AND lot_id = ANY($1) GROUP BY lot_id, job_id`,
+            [lots.map((l) => l.id)],
+          )
+        : [];
+      const heldBy = (lotId: string, mine: boolean) =>
+        held
+          .filter((h) => h.lotId === lotId && (h.jobId === job.id) === mine)
+          .reduce((s, h) => s.plus(h.held), ZERO);
+      const mineHeld = lots.reduce((s, l) => s.plus(heldBy(l.id, true)), ZERO);
+      const need = Decimal.max(ZERO, n.needed.minus(mineHeld).minus(out.get(n.materialId) ?? ZERO));
+      const offered: FefoLot[] = lots.map((l) => ({
+        id: l.id,
+        quantity: Decimal.max(
+          ZERO,
+          new Decimal(l.quantity).minus(heldBy(l.id, false)).minus(heldBy(l.id, true)),
+        ),
+        expiresOn: l.fefoExpiresOn,
+        usable: l.status === 'available' && !l.exposureFlagged,
+      }));
+      const result = allocateFefo(offered, need, useBy);
+      for (const a of result.allocations) {
+        await m.query(
+          `INSERT INTO reservations (company_id, job_id, estimate_id, material_id, lot_id, quantity, job_date, use_by, created_by)
+           VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
+          [
+            user.companyId,
+            job.id,
+            job.acceptedEstimateId,
+            n.materialId,
+            a.lotId,
+            fmt(a.quantity),
+            job.scheduledOn,
+            useBy,
+            user.id,
+          ],
+        );
+      }
+      if (result.shortfall.gt(0)) {
+        const lead = n.leadTimeDays;
+        await m.query(
+          `INSERT INTO reservation_shortfalls (company_id, job_id, estimate_id, material_id, quantity, job_date, needed_by, lead_time_days, supplier_id, supplier_name)
+           VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10)`,
+          [
+            user.companyId,
+            job.id,
+            job.acceptedEstimateId,
+            n.materialId,
+            fmt(result.shortfall),
+            job.scheduledOn,
+            addDays(job.scheduledOn, -(lead ?? 0)),
+            lead,
+            n.supplier?.id ?? null,
+            n.supplier?.name ?? null,
+          ],
+        );
+      }
+    }
+  }
+
+  /** Releases everything the job holds (on DELETE, and when it is lost or cancelled). */
+  async releaseIn(
+    m: EntityManager,
+    companyId: string,
+    jobId: string,
+    userId: string | null,
+    reason: string,
+  ): Promise<number> {
+    const released: unknown[] = await m.query(
+      `UPDATE reservations SET status = 'released', released_at = now(), released_by = $3, release_reason = $4
+        WHERE company_id = $1 AND job_id = $2 AND status = 'held' RETURNING id`,
+      [companyId, jobId, userId, reason],
+    );
+    await m.query(`DELETE FROM reservation_shortfalls WHERE company_id = $1 AND job_id = $2`, [
+      companyId,
+      jobId,
+    ]);
+    return released.length;
+  }
+
+  async release(user: AuthUser, jobId: string): Promise<ReservationsResponse> {
+    await this.db.transaction(async (m) => {
+      const job = await this.jobs.find(user.companyId, jobId, m, true);
+      await this.releaseIn(m, user.companyId, job.id, user.id, `Released by ${user.name}`);
+    });
+    return this.view(user.companyId, jobId);
+  }
+
+  /** Inside a status change: a job lost, cancelled or invoiced lets go of its stock. */
+  async onStatusChange(m: EntityManager, job: Job, userId: string): Promise<void> {
+    if (!jobHoldsStock(job.status)) {
+      await this.releaseIn(m, job.companyId, job.id, userId, `Job ${jobReference(job.number)} ${job.status}`);
+    }
+  }
+
+  /** Inside an acceptance: stock held for another version must be released first. */
+  async beforeAccept(m: EntityManager, job: Job, e: Estimate): Promise<void> {
+    const other: { version: number }[] = await m.query(
+      `SELECT DISTINCT e.version FROM reservations r JOIN estimates e ON e.id = r.estimate_id
+        WHERE r.job_id = $1 AND r.status = 'held' AND r.estimate_id <> $2`,
+      [job.id, e.id],
+    );
+    if (other.length > 0) {
+      throw new RuleViolation(
+        `Stock is reserved for estimate version ${other.map((o) => o.version).join(', ')}: release the reservations before accepting version ${e.version}`,
+        'reserved_for_other_version',
+      );
+    }
+  }
+
+  /** Held and issued reservations of a job, with their lots as they are now. */
+  async heldRows(m: EntityManager, companyId: string, jobId: string): Promise<HeldRow[]> {
+    return m.query(
+      `SELECT r.id, r.material_id AS "materialId", r.lot_id AS "lotId", r.estimate_id AS "estimateId", r.quantity::text AS quantity,
+              r.issued_quantity::text AS "issuedQuantity", r.status, r.created_at AS "createdAt",
+              l.batch_number AS "batchNumber", l.expires_on::text AS "expiresOn", l.status AS "lotStatus",
+              l.exposure_flagged AS "exposureFlagged", l.quantity::text AS "lotQuantity"
+         FROM reservations r JOIN lots l ON l.id = r.lot_id
+        WHERE r.company_id = $1 AND r.job_id = $2 AND r.status <> 'released'
+        ORDER BY r.material_id, l.expires_on NULLS LAST, r.created_at, r.id`,
+      [companyId, jobId],
+    );
+  }
+
+  /** What is wrong now with a held lot for the job date (domain lotUsableOn). */
+  flags(
+    r: Pick<
+      HeldRow,
+      'expiresOn' | 'lotStatus' | 'exposureFlagged' | 'lotQuantity' | 'quantity' | 'issuedQuantity'
+    >,
+    jobDate: string | null,
+    margin: number,
+  ) {
+    const out: { code: ReservationFlagCode; message: string }[] = [];
+    if (r.lotStatus === 'quarantined' || r.lotStatus === 'written-off') {
+      out.push({
+        code: 'quarantined',
+        message: `The lot is ${r.lotStatus}: it cannot go to the job; release it and reserve again.`,
+      });
+    }
+    if (r.exposureFlagged) {
+      out.push({
+        code: 'exposure-flagged',
+        message:
+          'The lot is flagged “check before use” (stored outside its temperature range): check it and clear the flag, or reserve another lot.',
+      });
+    }
+    if (jobDate && r.expiresOn) {
+      if (!lotUsableOn({ expiresOn: r.expiresOn, usable: true }, jobDate)) {
+        out.push({
+          code: 'expires-before-job',
+          message: `The lot expires on ${r.expiresOn}, before the job date ${jobDate}: release it and reserve again.`,
+        });
+      } else if (!lotUsableOn({ expiresOn: r.expiresOn, usable: true }, jobDate, margin)) {
+        out.push({
+          code: 'expires-within-margin',
+          message: `The lot expires on ${r.expiresOn}, within the ${margin}-day margin after the job date ${jobDate}.`,
+        });
+      }
+    }
+    const held = new Decimal(r.quantity).minus(r.issuedQuantity);
+    if (held.gt(r.lotQuantity)) {
+      out.push({
+        code: 'not-in-stock',
+        message: `Only ${new Decimal(r.lotQuantity).toString()} of the lot is left in stock.`,
+      });
+    }
+    return out;
+  }
+
+  /** The job's reservations, shortfalls and flags as they stand. */
+  async view(
+    companyId: string,
+    jobId: string,
+    m: EntityManager = this.db.manager,
+  ): Promise<ReservationsResponse> {
+    const job = await this.jobs.find(companyId, jobId, m);
+    const margin = await this.settings(m, companyId);
+    const useBy = job.scheduledOn ? addDays(job.scheduledOn, margin) : null;
+    if (!job.acceptedEstimateId) {
+      return {
+        jobId: job.id,
+        jobDate: job.scheduledOn,
+        marginDays: margin,
+        useBy,
+        estimate: null,
+        state: 'no-estimate',
+        materials: [],
+        skipped: [],
+        flagged: 0,
+      };
+    }
+    const [{ version }] = (await m.query(`SELECT version FROM estimates WHERE id = $1`, [
+      job.acceptedEstimateId,
+    ])) as [{ version: number }];
+    const { needed, skipped } = await this.neededFor(m, companyId, job.acceptedEstimateId);
+    const rows = await this.heldRows(m, companyId, job.id);
+    const out = await this.netOut(m, companyId, job.id);
+    const shortfalls: {
+      materialId: string;
+      quantity: string;
+      neededBy: string;
+      leadTimeDays: number | null;
+      supplierId: string | null;
+      supplierName: string | null;
+      createdAt: Date;
+    }[] = await m.query(
+      `SELECT material_id AS "materialId", quantity::text AS quantity, needed_by::text AS "neededBy", lead_time_days AS "leadTimeDays",
+                supplier_id AS "supplierId", supplier_name AS "supplierName", created_at AS "createdAt"
+           FROM reservation_shortfalls WHERE company_id = $1 AND job_id = $2`,
+      [companyId, job.id],
+    );
+    let flagged = 0;
+    const materials: ReservationMaterialResponse[] = needed.map((n) => {
+      const mine = rows.filter((r) => r.materialId === n.materialId);
+      const lines = mine.map((r) => {
+        const heldQ = r.status === 'held' ? new Decimal(r.quantity).minus(r.issuedQuantity) : ZERO;
+        const flags = r.status === 'held' ? this.flags(r, job.scheduledOn, margin) : [];
+        flagged += flags.length ? 1 : 0;
+        return {
+          id: r.id,
+          lot: { id: r.lotId, batchNumber: r.batchNumber, expiresOn: r.expiresOn },
+          status: r.status,
+          reservedQuantity: new Decimal(r.quantity).toString(),
+          issuedQuantity: new Decimal(r.issuedQuantity).toString(),
+          heldQuantity: heldQ.toString(),
+          flags,
+          createdAt: r.createdAt.toISOString(),
+        };
+      });
+      const held = lines.reduce((s, l) => s.plus(l.heldQuantity), ZERO);
+      const issued = out.get(n.materialId) ?? ZERO;
+      const s = shortfalls.find((x) => x.materialId === n.materialId);
+      let toOrder: { packs: { size: string; label: string; count: number }[]; total: string } | null = null;
+      if (s && n.packSizes.length) {
+        const choice = shortfallToOrder(
+          s.quantity,
+          n.packSizes.map((p) => p.size),
+          n.reorderQuantity,
+        );
+        toOrder = {
+          packs: choice.packs.map((p) => ({
+            size: p.size.toString(),
+            label: n.packSizes.find((x) => new Decimal(x.size).eq(p.size))?.label ?? p.size.toString(),
+            count: p.count,
+          })),
+          total: choice.total.toString(),
+        };
+      }
+      return {
+        material: { id: n.materialId, code: n.code, name: n.name },
+        unit: n.unit,
+        needed: n.needed.toString(),
+        held: held.toString(),
+        issued: issued.toString(),
+        outstanding: Decimal.max(ZERO, n.needed.minus(held).minus(issued)).toString(),
+        reservations: lines,
+        shortfall: s
+          ? {
+              quantity: new Decimal(s.quantity).toString(),
+              neededBy: s.neededBy,
+              leadTimeDays: s.leadTimeDays,
+              supplier: s.supplierId ? { id: s.supplierId, name: s.supplierName ?? '' } : null,
+              toOrder,
+              checkedAt: s.createdAt.toISOString(),
+            }
+          : null,
+      };
+    });
+    const state =
+      shortfalls.length > 0
+        ? 'short'
+        : materials.every((x) => new Decimal(x.outstanding).isZero())
+          ? 'reserved'
+          : 'not-reserved';
+    return {
+      jobId: job.id,
+      jobDate: job.scheduledOn,
+      marginDays: margin,
+      useBy,
+      estimate: { id: job.acceptedEstimateId, version },
+      state,
+      materials,
+      skipped,
+      flagged,
+    };
+  }
 }

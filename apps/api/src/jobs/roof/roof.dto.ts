@@ -67,9 +67,19 @@ export class RoofAreaDto {
   @IsDecimalValue()
   widthM?: string;
 
-  @ApiPropertyOptional({ example: [['0', '0'], ['6', '0'], ['6', '4'], ['0', '4']], description: 'polygon only: corners [x, y] in m' })
+  @ApiPropertyOptional({
+    example: [
+      ['0', '0'],
+      ['6', '0'],
+      ['6', '4'],
+      ['0', '4'],
+    ],
+    description: 'polygon only: corners [x, y] in m',
+  })
   @ValidateIf((o: RoofAreaDto) => o.shape === 'polygon' || o.points !== undefined)
-  @Transform(({ value }: { value: unknown }) => (Array.isArray(value) ? value.map((p) => (Array.isArray(p) ? p.map(asString) : p)) : value))
+  @Transform(({ value }: { value: unknown }) =>
+    Array.isArray(value) ? value.map((p) => (Array.isArray(p) ? p.map(asString) : p)) : value,
+  )
   @IsPointList()
   points?: [string, string][];
 
@@ -89,7 +99,10 @@ export class RoofEdgeDto {
   @IsDecimalValue()
   lengthM: string;
 
-  @ApiPropertyOptional({ example: '0.15', description: 'wall edges only: upstand height laminated up the wall, m' })
+  @ApiPropertyOptional({
+    example: '0.15',
+    description: 'wall edges only: upstand height laminated up the wall, m',
+  })
   @IsOptional()
   @IsDecimalValue()
   upstandM?: string | null;
@@ -126,7 +139,11 @@ function IsCorners(): PropertyDecorator {
         typeof value === 'object' &&
         !Array.isArray(value) &&
         Object.entries(value as Record<string, unknown>).every(
-          ([k, v]) => (k === 'external' || k === 'internal') && Number.isInteger(v) && (v as number) >= 0 && (v as number) <= 999,
+          ([k, v]) =>
+            (k === 'external' || k === 'internal') &&
+            Number.isInteger(v) &&
+            (v as number) >= 0 &&
+            (v as number) <= 999,
         ),
       defaultMessage: () => 'must be an object {external, internal} of whole numbers from 0 to 999',
     },
@@ -163,7 +180,11 @@ export class PutRoofDto {
   @Max(999)
   outlets?: number;
 
-  @ApiPropertyOptional({ example: { external: 4, internal: 1 }, nullable: true, description: 'left out or null: external corners derived from the edges' })
+  @ApiPropertyOptional({
+    example: { external: 4, internal: 1 },
+    nullable: true,
+    description: 'left out or null: external corners derived from the edges',
+  })
   @IsOptional()
   @IsCorners()
   corners?: { external?: number; internal?: number } | null;

@@ -33,7 +33,13 @@ export function normaliseRoof(dto: PutRoofDto): StoredRoof {
       if (a.points !== undefined) {
         throw new RoofRefused(`${areaLabel(a, i)} is a rectangle: give lengthM and widthM, not points.`);
       }
-      return { name: a.name, shape: 'rectangle', lengthM: a.lengthM as string, widthM: a.widthM as string, fall };
+      return {
+        name: a.name,
+        shape: 'rectangle',
+        lengthM: a.lengthM as string,
+        widthM: a.widthM as string,
+        fall,
+      };
     }
     if (a.lengthM !== undefined || a.widthM !== undefined) {
       throw new RoofRefused(`${areaLabel(a, i)} is a polygon: give its points, not lengthM and widthM.`);
@@ -42,7 +48,9 @@ export function normaliseRoof(dto: PutRoofDto): StoredRoof {
   });
   const edges = dto.edges.map((e, i) => {
     if (e.areaIndex !== undefined && e.areaIndex !== null && e.areaIndex >= areas.length) {
-      throw new RoofRefused(`Edge ${i + 1}: areaIndex ${e.areaIndex} is not an area of this roof (it has ${areas.length}).`);
+      throw new RoofRefused(
+        `Edge ${i + 1}: areaIndex ${e.areaIndex} is not an area of this roof (it has ${areas.length}).`,
+      );
     }
     return {
       kind: e.kind,
@@ -58,7 +66,9 @@ export function normaliseRoof(dto: PutRoofDto): StoredRoof {
     edges,
     pipes: dto.pipes ?? 0,
     outlets: dto.outlets ?? 0,
-    corners: dto.corners ? { external: dto.corners.external ?? 0, internal: dto.corners.internal ?? 0 } : null,
+    corners: dto.corners
+      ? { external: dto.corners.external ?? 0, internal: dto.corners.internal ?? 0 }
+      : null,
     notes: dto.notes ?? null,
   };
 }
@@ -71,7 +81,11 @@ export function toDomainRoof(roof: StoredRoof, airC?: string): Roof {
         ? { name: a.name, lengthM: a.lengthM as string, widthM: a.widthM as string }
         : { name: a.name, polygon: (a.points ?? []) as [string, string][] },
     ),
-    edges: roof.edges.map((e) => (e.upstandM === null ? { kind: e.kind, lengthM: e.lengthM } : { kind: e.kind, lengthM: e.lengthM, upstandM: e.upstandM })),
+    edges: roof.edges.map((e) =>
+      e.upstandM === null
+        ? { kind: e.kind, lengthM: e.lengthM }
+        : { kind: e.kind, lengthM: e.lengthM, upstandM: e.upstandM },
+    ),
     pipes: roof.pipes,
     outlets: roof.outlets,
     ...(roof.corners ? { corners: roof.corners } : {}),
@@ -151,8 +165,18 @@ export function summariseRoof(roof: StoredRoof, buildUp: BuildUpInput): RoofSumm
       throw e;
     }
     const rise = new Decimal(a.fall.riseMm);
-    const ratio = rise.isZero() ? 'level' : `1:${new Decimal(a.fall.runM).times(MM_PER_M).div(rise).toDecimalPlaces(0).toString()}`;
-    falls.push({ areaIndex: i, areaName: a.name, riseMm: a.fall.riseMm, runM: a.fall.runM, ratio, level: check.level, message: check.message });
+    const ratio = rise.isZero()
+      ? 'level'
+      : `1:${new Decimal(a.fall.runM).times(MM_PER_M).div(rise).toDecimalPlaces(0).toString()}`;
+    falls.push({
+      areaIndex: i,
+      areaName: a.name,
+      riseMm: a.fall.riseMm,
+      runM: a.fall.runM,
+      ratio,
+      level: check.level,
+      message: check.message,
+    });
     if (check.level !== 'ok') {
       warnings.push(`${areaLabel(a, i)}: ${check.message}`);
     }
@@ -164,7 +188,12 @@ export function summariseRoof(roof: StoredRoof, buildUp: BuildUpInput): RoofSumm
     }
   }
   return {
-    areas: takeoff.areas.map((a, index) => ({ index, name: roof.areas[index]?.name ?? a.name, shape: a.shape, areaM2: a.areaM2.toString() })),
+    areas: takeoff.areas.map((a, index) => ({
+      index,
+      name: roof.areas[index]?.name ?? a.name,
+      shape: a.shape,
+      areaM2: a.areaM2.toString(),
+    })),
     deckAreaM2: takeoff.deckAreaM2.toString(),
     upstandAreaM2: takeoff.upstandAreaM2.toString(),
     laminatedAreaM2: takeoff.laminatedAreaM2.toString(),
