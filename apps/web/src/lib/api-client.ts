@@ -45,6 +45,8 @@ export interface RequestOptions {
    * invitations) pass false, so a stale token can neither travel with them nor end a session.
    */
   auth?: boolean;
+  /** Extra request headers, e.g. an `Idempotency-Key` for a stock-changing form. */
+  headers?: Record<string, string>;
 }
 
 const FALLBACK_MESSAGES: Record<number, string> = {
@@ -90,7 +92,7 @@ async function readError(response: Response): Promise<ApiError> {
 
 async function send(path: string, options: RequestOptions, accept: string): Promise<Response> {
   const token = options.auth === false ? null : getAccessToken();
-  const headers = new Headers({ Accept: accept });
+  const headers = new Headers({ ...options.headers, Accept: accept });
   if (options.body !== undefined) {
     headers.set('Content-Type', 'application/json');
   }
