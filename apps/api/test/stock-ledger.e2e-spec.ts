@@ -193,7 +193,10 @@ describe('stock ledger', () => {
       const lotId = r.lines[0]!.lotId;
       const jobId = await insertJob(t, w.companyId);
       const actor = { id: w.storeman.user.id };
-      const issued = await inTx((m) => stock.issueToJob(m, w.companyId, actor, { lotId, quantity: '25', jobId, fromLocationId: w.location.bayA }));
+      const issued = await inTx(async (m) => {
+        await stock.lockForMovements(m, w.companyId, { lotIds: [lotId], locationIds: [w.location.bayA] });
+        return stock.issueToJob(m, w.companyId, actor, { lotId, quantity: '25', jobId, fromLocationId: w.location.bayA });
+      });
       expect(issued.movements[0]).toMatchObject({ kind: 'issue', quantity: '-25.000', jobId });
       expect(issued.lot.quantity).toBe('35.000');
       expect(await status(inTx((m) => stock.returnFromJob(m, w.companyId, actor, { lotId, quantity: '25.5', jobId, toLocationId: w.location.bayB })))).toBe(409);

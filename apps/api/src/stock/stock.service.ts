@@ -150,6 +150,21 @@ export class StockService {
       .map(({ receivedOn: _r, ...lot }) => lot);
   }
 
+  /**
+   * When one transaction posts several movements (an issue of many lines), call this first with
+   * every lot and location it will touch: it takes the locks in the ledger's one order (lots by
+   * id, then locations by id, with the zone of each location stock goes into), so it can never
+   * wait in a circle with another request. Later calls in the transaction find them held.
+   */
+  async lockForMovements(
+    m: EntityManager,
+    companyId: string,
+    touch: { lotIds: readonly string[]; locationIds: readonly string[]; putInto?: readonly string[] },
+  ): Promise<void> {
+    await this.ledger.lockLots(m, companyId, touch.lotIds);
+    await this.ledger.lockLocations(m, companyId, [...touch.locationIds, ...(touch.putInto ?? [])], touch.putInto ?? []);
+  }
+
   /** Balances of lots (not locked): total and per location. */
   async lotBalances(m: EntityManager | null, companyId: string, lotIds: readonly string[]): Promise<LotBalanceSummary[]> {
     const rows: { lotId: string; quantity: string; places: { locationId: string; quantity: string }[] }[] = await (m ?? this.db.manager).query(
