@@ -15,6 +15,8 @@ const CODES: Record<number, string> = {
   429: 'too_many_requests',
 };
 
+const RETRYABLE = new Set(['40P01', '40001', '55P03']);
+
 /** Domain rule violations thrown by services; mapped to 409 or 422 with the rule's message. */
 export class RuleViolation extends HttpException {
   constructor(message: string, code = 'rule_violation', status = HttpStatus.CONFLICT) {
@@ -56,6 +58,12 @@ export class AllExceptionsFilter implements ExceptionFilter {
       status = HttpStatus.BAD_REQUEST;
       code = 'bad_request';
       message = 'A value in the request has the wrong format';
+    } else if (exception instanceof QueryFailedError && RETRYABLE.has((exception as { code?: string }).code ?? '')) {
+      // Deadlock, serialisation failure or lock timeout: the transaction was rolled back whole,
+      // so nothing changed and the same request can simply be sent again.
+      status = HttpStatus.CONFLICT;
+      code = 'retry';
+      message = 'Someone else changed the same stock at the same moment; nothing was saved. Please try again.';
     }
 
     if (status >= 500) {
