@@ -1,0 +1,381 @@
+import type { Caution, EdgeKind, JobStatus, LineRole, MaterialKind, Unit } from '@potlife/domain';
+
+// The shapes the jobs API answers with (apps/api/src/jobs/dto). Amounts and quantities are decimal
+// strings; they are formatted for display, never computed with here.
+
+export interface Named {
+  id: string;
+  name: string;
+}
+
+export const SUBSTRATES = ['timber-deck', 'osb', 'existing-felt', 'asphalt', 'concrete', 'old-grp'] as const;
+export type Substrate = (typeof SUBSTRATES)[number];
+
+/** The stock side of a job at a glance. */
+export type MaterialState = 'no-estimate' | 'not-reserved' | 'reserved' | 'short' | 'issued';
+
+export interface Job {
+  id: string;
+  reference: string;
+  number: number;
+  title: string;
+  status: JobStatus;
+  nextStatuses: JobStatus[];
+  statusChangedAt: string;
+  customer: Named;
+  siteAddress: string;
+  substrate: Substrate;
+  scheduledOn: string | null;
+  estimator: Named | null;
+  crew: string | null;
+  topcoatColour: string | null;
+  buildUp: Named | null;
+  hasRoof: boolean;
+  roofUpdatedAt: string | null;
+  acceptedEstimate: { id: string; version: number } | null;
+  /** the accepted estimate's net, £; left out for a storeman */
+  value?: string | null;
+  materialState: MaterialState;
+  notes: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface StatusChange {
+  from: JobStatus | null;
+  to: JobStatus;
+  reason: string | null;
+  changedBy: Named | null;
+  changedAt: string;
+}
+
+export interface JobDetail extends Job {
+  customerContact: { contactName: string | null; phone: string | null; email: string | null };
+  statusHistory: StatusChange[];
+}
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface Customer {
+  id: string;
+  name: string;
+  contactName: string | null;
+  email: string | null;
+  phone: string | null;
+  billingAddress: string | null;
+  notes: string | null;
+  jobCount: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** A build-up as the estimator chooses it (the rates are the owner's business). */
+export interface BuildUpChoice {
+  id: string;
+  name: string;
+  description: string | null;
+  active: boolean;
+  matGsm: string;
+  layers: string;
+  upstandM: string;
+  labourRate: string;
+  markupPct: string;
+  vatRatePct: string;
+  [rate: string]: unknown;
+}
+
+// The roof as the API stores it.
+export interface StoredFall {
+  riseMm: string;
+  runM: string;
+}
+
+export interface StoredArea {
+  name: string;
+  shape: 'rectangle' | 'polygon';
+  lengthM?: string;
+  widthM?: string;
+  points?: [string, string][];
+  fall: StoredFall | null;
+}
+
+export interface StoredEdge {
+  kind: EdgeKind;
+  lengthM: string;
+  upstandM: string | null;
+  areaIndex: number | null;
+  side: number | null;
+  label: string | null;
+}
+
+export interface StoredRoof {
+  areas: StoredArea[];
+  edges: StoredEdge[];
+  pipes: number;
+  outlets: number;
+  corners: { external: number; internal: number } | null;
+  notes: string | null;
+}
+
+export interface FallResult {
+  areaIndex: number;
+  areaName: string;
+  riseMm: string;
+  runM: string;
+  ratio: string;
+  level: 'ok' | 'warning' | 'error';
+  message: string;
+}
+
+export interface RoofSummary {
+  areas: { index: number; name: string; shape: 'rectangle' | 'polygon'; areaM2: string }[];
+  deckAreaM2: string;
+  upstandAreaM2: string;
+  laminatedAreaM2: string;
+  trimM: string;
+  trimMByKind: Record<EdgeKind, string>;
+  corners: { external: number; internal: number; derived: boolean };
+  pipes: number;
+  outlets: number;
+  falls: FallResult[];
+  warnings: string[];
+}
+
+export interface RoofRecord {
+  jobId: string;
+  updatedAt: string | null;
+  roof: StoredRoof | null;
+  summary: RoofSummary | null;
+}
+
+/** The body of PUT /api/jobs/{id}/roof. */
+export interface RoofBody {
+  areas: {
+    name: string;
+    shape: 'rectangle' | 'polygon';
+    lengthM?: string;
+    widthM?: string;
+    points?: [string, string][];
+    fall?: StoredFall | null;
+  }[];
+  edges: {
+    kind: EdgeKind;
+    lengthM: string;
+    upstandM?: string | null;
+    areaIndex?: number | null;
+    side?: number | null;
+    label?: string | null;
+  }[];
+  pipes: number;
+  outlets: number;
+  corners: { external: number; internal: number } | null;
+  notes: string | null;
+}
+
+// Estimates.
+export interface EstimateLine {
+  position: number;
+  role: LineRole;
+  materialKind: MaterialKind;
+  description: string;
+  unit: Unit;
+  quantity: string;
+  lengths: number | null;
+  metres: string | null;
+  material: Named | null;
+}
+
+export interface EstimatePack {
+  size: string;
+  label: string;
+  count: number;
+  packPrice: string | null;
+  supplier: { id: string; name: string; leadTimeDays: number } | null;
+  cost: string | null;
+}
+
+export interface EstimateMaterial {
+  position: number;
+  roles: LineRole[];
+  materialKind: MaterialKind;
+  material: Named | null;
+  unit: string;
+  quantity: string;
+  packs: EstimatePack[];
+  packTotal: string | null;
+  leftover: string | null;
+  cost: string | null;
+  priced: boolean;
+  problem: string | null;
+}
+
+export interface Estimate {
+  id: string;
+  jobId: string;
+  version: number;
+  accepted: boolean;
+  acceptedAt: string | null;
+  createdAt: string;
+  createdBy: Named | null;
+  note: string | null;
+  buildUp: { id: string | null; name: string; labourRate: string; markupPct: string; vatRatePct: string };
+  pricedOn: string;
+  airC: string;
+  catalystPercent: string;
+  deckAreaM2: string;
+  upstandAreaM2: string;
+  laminatedAreaM2: string;
+  trimM: string;
+  corners: { external: number; internal: number; derived: boolean };
+  pipes: number;
+  outlets: number;
+  lines: EstimateLine[];
+  materials: EstimateMaterial[];
+  labour: { laminatingHours: string; trimHours: string; totalHours: string; rate: string; cost: string };
+  price: {
+    materialCost: string;
+    labourCost: string;
+    markupPct: string;
+    markup: string;
+    net: string;
+    vatRatePct: string;
+    vat: string;
+    gross: string;
+  };
+  unpriced: number;
+  problems: string[];
+  cautions: Caution[];
+}
+
+export interface EstimateSummary {
+  id: string;
+  version: number;
+  accepted: boolean;
+  createdAt: string;
+  createdBy: Named | null;
+  buildUpName: string;
+  laminatedAreaM2: string;
+  net: string;
+  gross: string;
+  unpriced: number;
+}
+
+export interface LayingCheckResult {
+  ok: boolean;
+  problems: string[];
+  dewPointC: string;
+  catalystPercent: string | null;
+  workingTime: { minMinutes: number; maxMinutes: number; text: string } | null;
+  cautions: Caution[];
+}
+
+// Reservations, the pick list, issues and returns (apps/api/src/jobs/reservations/reservation.dto.ts).
+export type ReservationFlagCode =
+  'expires-before-job' | 'expires-within-margin' | 'quarantined' | 'exposure-flagged' | 'not-in-stock';
+
+export interface ReservationFlag {
+  code: ReservationFlagCode;
+  message: string;
+}
+
+export interface LotRef {
+  id: string;
+  batchNumber: string | null;
+  expiresOn: string | null;
+}
+
+export interface ReservationLine {
+  id: string;
+  lot: LotRef;
+  status: 'held' | 'issued';
+  reservedQuantity: string;
+  issuedQuantity: string;
+  heldQuantity: string;
+  flags: ReservationFlag[];
+  createdAt: string;
+}
+
+export interface PackCountRef {
+  size: string;
+  label: string;
+  count: number;
+}
+
+export interface Shortfall {
+  quantity: string;
+  neededBy: string;
+  leadTimeDays: number | null;
+  supplier: Named | null;
+  toOrder: { packs: PackCountRef[]; total: string } | null;
+  checkedAt: string;
+}
+
+export interface ReservationMaterial {
+  material: { id: string; code: string; name: string };
+  unit: string;
+  needed: string;
+  held: string;
+  issued: string;
+  outstanding: string;
+  reservations: ReservationLine[];
+  shortfall: Shortfall | null;
+}
+
+export interface Reservations {
+  jobId: string;
+  jobDate: string | null;
+  marginDays: number;
+  useBy: string | null;
+  estimate: { id: string; version: number } | null;
+  state: 'no-estimate' | 'not-reserved' | 'reserved' | 'short';
+  materials: ReservationMaterial[];
+  skipped: { roles: string[]; materialKind: string; reason: string }[];
+  flagged: number;
+}
+
+export interface PickListLine {
+  material: { id: string; code: string; name: string; kind: string };
+  unit: string;
+  lot: LotRef;
+  quantity: string;
+  places: { locationId: string; locationName: string; quantity: string }[];
+  flags: ReservationFlag[];
+}
+
+export interface PickList {
+  jobId: string;
+  reference: string;
+  title: string;
+  siteAddress: string;
+  jobDate: string | null;
+  crew: string | null;
+  lines: PickListLine[];
+  unreserved: { material: { id: string; code: string; name: string }; unit: string; quantity: string }[];
+  issued: { material: Named; unit: string; issued: string; returned: string }[];
+  cautions: Caution[];
+}
+
+export interface SiteMovementLine {
+  movementId: string;
+  lotId: string;
+  batchNumber: string | null;
+  material: Named;
+  unit: string;
+  quantity: string;
+  locationId: string;
+  locationName: string;
+  fullPacks?: number;
+  partQuantity?: string;
+}
+
+export interface SiteMovement {
+  jobId: string;
+  operationIds: string[];
+  lines: SiteMovementLine[];
+  warnings: string[];
+}

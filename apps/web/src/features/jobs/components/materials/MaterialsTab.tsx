@@ -1,0 +1,77 @@
+import { Stack } from '@mantine/core';
+import { PageLoader } from '../../../../components/PageLoader';
+import { QueryError } from '../../../../components/QueryError';
+import type { Role } from '../../../../lib/roles';
+import { usePickList } from '../../api/get-pick-list';
+import { useReservations } from '../../api/get-reservations';
+import type { JobDetail } from '../../api/types';
+import { PickListPanel } from './PickListPanel';
+import { ReservationsPanel } from './ReservationsPanel';
+import { ReturnsPanel } from './ReturnsPanel';
+
+interface MaterialsTabProps {
+  job: JobDetail;
+  role: Role;
+  onGoToEstimate?: () => void;
+  onEditJob?: () => void;
+}
+
+/** Reserved, issued and returned: the estimator reserves, the storeman picks, issues and takes back. */
+export function MaterialsTab({ job, role, onGoToEstimate, onEditJob }: MaterialsTabProps) {
+  const reservations = useReservations(job.id);
+  const pickList = usePickList(job.id);
+  const store = role === 'storeman' || role === 'owner';
+
+  if (reservations.isPending) {
+    return <PageLoader label="Loading the materials…" />;
+  }
+  if (reservations.isError) {
+    return (
+      <QueryError
+        what="the materials"
+        error={reservations.error}
+        onRetry={() => void reservations.refetch()}
+        retrying={reservations.isFetching}
+      />
+    );
+  }
+  const pick = pickList.isSuccess ? (
+    <PickListPanel job={job} pickList={pickList.data} canIssue={store} />
+  ) : pickList.isError ? (
+    <QueryError
+      what="the pick list"
+      error={pickList.error}
+      onRetry={() => void pickList.refetch()}
+      retrying={pickList.isFetching}
+    />
+  ) : (
+    <PageLoader label="Loading the pick list…" />
+  );
+  const reserved = (
+    <ReservationsPanel
+      job={job}
+      reservations={reservations.data}
+      canReserve={role !== 'storeman'}
+      onGoToEstimate={onGoToEstimate}
+      onEditJob={onEditJob}
+    />
+  );
+  const returns = (
+    <ReturnsPanel job={job} reservations={reservations.data} pickList={pickList.data} canReturn={store} />
+  );
+
+  // The storeman's work first for the storeman.
+  return role === 'storeman' ? (
+    <Stack gap="md">
+      {pick}
+      {returns}
+      {reserved}
+    </Stack>
+  ) : (
+    <Stack gap="md">
+      {reserved}
+      {pick}
+      {returns}
+    </Stack>
+  );
+}
