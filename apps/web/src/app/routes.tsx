@@ -28,6 +28,15 @@ const UsersRoute = lazy(() =>
 const MailOutboxRoute = lazy(() =>
   import('../features/mail/routes/MailOutboxRoute').then((m) => ({ default: m.MailOutboxRoute })),
 );
+// The estimator's work: jobs, their roofs, estimates and materials; the calendar; build-ups.
+const JobsRoute = lazy(() => import('../features/jobs/routes/JobsRoute').then((m) => ({ default: m.JobsRoute })));
+const JobRoute = lazy(() => import('../features/jobs/routes/JobRoute').then((m) => ({ default: m.JobRoute })));
+const CalendarRoute = lazy(() =>
+  import('../features/calendar/routes/CalendarRoute').then((m) => ({ default: m.CalendarRoute })),
+);
+const BuildUpsRoute = lazy(() =>
+  import('../features/build-ups/routes/BuildUpsRoute').then((m) => ({ default: m.BuildUpsRoute })),
+);
 
 function Public({ children }: { children: ReactNode }) {
   return (
@@ -90,6 +99,39 @@ export const routes: RouteObject[] = [
         element: (
           <RequireRole roles={rolesFor('mailOutbox')}>
             <MailOutboxRoute />
+          </RequireRole>
+        ),
+      },
+      // Jobs (the storeman sees them without prices), the calendar, build-ups.
+      {
+        path: paths.jobs,
+        element: (
+          <RequireRole roles={rolesFor('jobs')}>
+            <JobsRoute />
+          </RequireRole>
+        ),
+      },
+      {
+        path: paths.job,
+        element: (
+          <RequireRole roles={rolesFor('jobs')}>
+            <JobRoute />
+          </RequireRole>
+        ),
+      },
+      {
+        path: paths.calendar,
+        element: (
+          <RequireRole roles={rolesFor('calendar')}>
+            <CalendarRoute />
+          </RequireRole>
+        ),
+      },
+      {
+        path: paths.buildUps,
+        element: (
+          <RequireRole roles={rolesFor('buildUps')}>
+            <BuildUpsRoute />
           </RequireRole>
         ),
       },

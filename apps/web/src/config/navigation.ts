@@ -1,4 +1,4 @@
-import { IconHome2, IconMailbox, IconUsers, type Icon } from '@tabler/icons-react';
+import { IconCalendarEvent, IconClipboardList, IconHome2, IconMailbox, IconStack2, IconUsers, type Icon } from '@tabler/icons-react';
 import type { Role } from '../lib/roles';
 import { paths } from './paths';
 
@@ -6,7 +6,7 @@ import { paths } from './paths';
 // the rows the user's role may see, and the router guards each screen with the same roles.
 // Later screens (stock, receipts, jobs, estimates, purchase orders...) add their row here.
 
-export type NavKey = 'home' | 'users' | 'mailOutbox';
+export type NavKey = 'home' | 'users' | 'mailOutbox' | 'jobs' | 'calendar' | 'buildUps';
 
 export interface NavEntry {
   key: NavKey;
@@ -26,6 +26,30 @@ export const navigation: readonly NavEntry[] = [
     icon: IconHome2,
     roles: ['owner', 'estimator', 'storeman'],
     summary: 'What you do in Potlife.',
+  },
+  {
+    key: 'jobs',
+    label: 'Jobs',
+    to: paths.jobs,
+    icon: IconClipboardList,
+    roles: ['owner', 'estimator', 'storeman'],
+    summary: 'Every job from enquiry to invoice: its roof plan, estimates, quote, materials and pick list.',
+  },
+  {
+    key: 'calendar',
+    label: 'Calendar',
+    to: paths.calendar,
+    icon: IconCalendarEvent,
+    roles: ['owner', 'estimator', 'storeman'],
+    summary: 'The scheduled jobs month by month, and whether their materials are all reserved or short.',
+  },
+  {
+    key: 'buildUps',
+    label: 'Build-ups',
+    to: paths.buildUps,
+    icon: IconStack2,
+    roles: ['owner', 'estimator'],
+    summary: 'The layers and rates roofs are priced with: mat, resin, trims, labour and markup.',
   },
   {
     key: 'users',

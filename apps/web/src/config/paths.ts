@@ -6,9 +6,15 @@ export const paths = {
   invitation: '/invitation/:token',
   users: '/users',
   mailOutbox: '/mail',
+  // The estimator's work: jobs, their roofs, estimates and materials; the calendar; build-ups.
+  jobs: '/jobs',
+  job: '/jobs/:jobId',
+  calendar: '/calendar',
+  buildUps: '/build-ups',
 } as const;
 
 export const hrefs = {
   invitation: (token: string) => `/invitation/${encodeURIComponent(token)}`,
   mailMessage: (messageId: string) => `${paths.mailOutbox}?message=${encodeURIComponent(messageId)}`,
+  job: (jobId: string, tab?: string) => `/jobs/${encodeURIComponent(jobId)}${tab ? `?tab=${encodeURIComponent(tab)}` : ''}`,
 } as const;
