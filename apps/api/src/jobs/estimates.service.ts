@@ -11,7 +11,7 @@ import {
   LineRole,
   workingTimeHint,
 } from '@potlife/domain';
-import { DataSource, EntityManager, In } from 'typeorm';
+import { DataSource, EntityManager } from 'typeorm';
 import { BuildUpsService, toDomainBuildUp } from '../build-ups/build-ups.service';
 import type { BuildUp } from '../build-ups/entities/build-up.entity';
 import type { AuthUser } from '../common/current-user';
@@ -26,6 +26,7 @@ import {
   LayingCheckResponse,
 } from './dto/estimate.dto';
 import { Estimate } from './entities/estimate.entity';
+import { EstimateBundle, readEstimateVersion } from './estimate-read';
 import { EstimateLine } from './entities/estimate-line.entity';
 import { EstimateMaterial } from './entities/estimate-material.entity';
 import { EstimatePack } from './entities/estimate-pack.entity';
@@ -45,14 +46,6 @@ export const today = (): string => {
 
 /** A job's estimates can change until the crew starts. */
 const ESTIMATING: readonly string[] = ['enquiry', 'quoted', 'won', 'scheduled'];
-
-export interface EstimateBundle {
-  estimate: Estimate;
-  lines: EstimateLine[];
-  materials: (EstimateMaterial & { packs: EstimatePack[] })[];
-  names: Map<string, string>;
-  accepted: boolean;
-}
 
 @Injectable()
 export class EstimatesService {
@@ -136,30 +129,33 @@ export class EstimatesService {
     if (!estimate) {
       throw new NotFoundException('Estimate not found');
     }
-    const [lines, materials, job] = await Promise.all([
+    return this.bundleOf(estimate, m);
+  }
+
+  /** The rest of an estimate, read in parallel: lines, materials, packs, names and whether it is the accepted one. */
+  async bundleOf(estimate: Estimate, m: EntityManager = this.db.manager): Promise<EstimateBundle> {
+    const estimateId = estimate.id;
+    const [lines, materials, packs, names, accepted] = await Promise.all([
       m.getRepository(EstimateLine).find({ where: { estimateId }, order: { position: 'ASC' } }),
       m.getRepository(EstimateMaterial).find({ where: { estimateId }, order: { position: 'ASC' } }),
-      m.getRepository(Job).findOneByOrFail({ id: estimate.jobId }),
+      m
+        .getRepository(EstimatePack)
+        .createQueryBuilder('p')
+        .innerJoin(EstimateMaterial, 'em', 'em.id = p.estimate_material_id')
+        .where('em.estimate_id = :estimateId', { estimateId })
+        .orderBy('p.packSize', 'DESC')
+        .getMany(),
+      m
+        .query(
+          `SELECT mt.id, mt.name FROM materials mt WHERE mt.id IN (SELECT material_id FROM estimate_lines WHERE estimate_id = $1)
+           UNION ALL SELECT u.id, u.name FROM users u WHERE u.id = $2`,
+          [estimateId, estimate.createdBy],
+        )
+        .then((rows: { id: string; name: string }[]) => new Map(rows.map((r) => [r.id, r.name]))),
+      m
+        .query(`SELECT accepted_estimate_id AS id FROM jobs WHERE id = $1`, [estimate.jobId])
+        .then((rows: { id: string | null }[]) => rows[0]?.id === estimateId),
     ]);
-    const packs = materials.length
-      ? await m
-          .getRepository(EstimatePack)
-          .find({
-            where: { estimateMaterialId: In(materials.map((x) => x.id)) },
-            order: { packSize: 'DESC' },
-          })
-      : [];
-    const ids = [
-      ...new Set([...lines.map((l) => l.materialId), estimate.createdBy].filter((x): x is string => !!x)),
-    ];
-    const names = new Map<string, string>();
-    if (ids.length) {
-      const rows: { id: string; name: string }[] = await m.query(
-        `SELECT id, name FROM materials WHERE id = ANY($1) UNION ALL SELECT id, name FROM users WHERE id = ANY($1)`,
-        [ids],
-      );
-      rows.forEach((r) => names.set(r.id, r.name));
-    }
     return {
       estimate,
       lines,
@@ -167,7 +163,7 @@ export class EstimatesService {
         Object.assign(x, { packs: packs.filter((p) => p.estimateMaterialId === x.id) }),
       ),
       names,
-      accepted: job.acceptedEstimateId === estimate.id,
+      accepted,
     };
   }
 
@@ -184,10 +180,14 @@ export class EstimatesService {
     return e;
   }
 
+  /** One estimate version in one round trip (readEstimateVersion); 404 for another company's job. */
   async get(user: AuthUser, jobId: string, version: number): Promise<EstimateResponse> {
-    const job = await this.jobs.find(user.companyId, jobId);
-    const e = await this.findVersion(user.companyId, job.id, version);
-    return this.respond(await this.bundle(user.companyId, e.id));
+    const bundle = await readEstimateVersion(this.db.manager, user.companyId, jobId, version);
+    if (!bundle) {
+      await this.jobs.find(user.companyId, jobId); // "Job not found" when it is not the company's
+      throw new NotFoundException(`Estimate version ${version} not found for this job`);
+    }
+    return this.respond(bundle);
   }
 
   /**

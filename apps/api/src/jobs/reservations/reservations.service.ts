@@ -204,48 +204,63 @@ export class ReservationsService {
       );
     }
     const margin = await this.settings(m, user.companyId);
-    const useBy = addDays(job.scheduledOn, margin);
-    const { needed } = await this.neededFor(m, user.companyId, job.acceptedEstimateId);
+    const jobDate = job.scheduledOn;
+    const estimateId = job.acceptedEstimateId;
+    const useBy = addDays(jobDate, margin);
+    const { needed } = await this.neededFor(m, user.companyId, estimateId);
     const out = await this.netOut(m, user.companyId, job.id);
-    await m.query(`DELETE FROM reservation_shortfalls WHERE job_id = $1`, [job.id]);
+    const ids = needed.map((n) => n.materialId);
+    // What this job holds now (its row lock keeps it still), and which materials have stock at
+    // all: only those are locked. Stock that arrives meanwhile is found by the next reservation.
+    const [mine, stocked] = await Promise.all([
+      m.query(
+        `SELECT id, material_id AS "materialId", lot_id AS "lotId", (quantity - issued_quantity)::text AS held
+           FROM reservations WHERE job_id = $1 AND status = 'held'`,
+        [job.id],
+      ) as Promise<{ id: string; materialId: string; lotId: string; held: string }[]>,
+      m.query(
+        `SELECT DISTINCT material_id AS id FROM lots WHERE company_id = $1 AND material_id = ANY($2) AND quantity > 0`,
+        [user.companyId, ids],
+      ) as Promise<{ id: string }[]>,
+    ]);
+    const withStock = new Set(stocked.map((r) => r.id));
+    const stale: string[] = [];
+    const holds: unknown[][] = [];
+    const shortfalls: unknown[][] = [];
     for (const n of [...needed].sort((a, b) => a.materialId.localeCompare(b.materialId))) {
-      const lots = await this.stock.lockLotsForMaterial(m, user.companyId, n.materialId);
+      const lots = withStock.has(n.materialId)
+        ? await this.stock.lockLotsForMaterial(m, user.companyId, n.materialId)
+        : [];
       // Holds of this job that no longer fit the job date (lot expired for it, quarantined,
       // flagged, gone) are let go and found again.
-      const mineRows: { id: string; lotId: string; held: string }[] = await m.query(
-        `SELECT id, lot_id AS "lotId", (quantity - issued_quantity)::text AS held FROM reservations
-          WHERE job_id = $1 AND material_id = $2 AND status = 'held' ORDER BY id FOR UPDATE`,
-        [job.id, n.materialId],
-      );
-      const stale = mineRows.filter((r) => {
+      const mineRows = mine.filter((r) => r.materialId === n.materialId);
+      const kept = new Set<string>();
+      for (const r of mineRows) {
         const lot = lots.find((l) => l.id === r.lotId);
-        return (
-          !lot ||
-          lot.status !== 'available' ||
-          lot.exposureFlagged ||
-          new Decimal(r.held).gt(lot.quantity) ||
-          !lotUsableOn({ expiresOn: lot.fefoExpiresOn, usable: true }, job.scheduledOn as string, margin)
-        );
-      });
-      if (stale.length) {
-        await m.query(
-          `UPDATE reservations SET status = 'released', released_at = now(), released_by = $2,
-                  release_reason = 'No longer usable for the job date: reserved again' WHERE id = ANY($1)`,
-          [stale.map((r) => r.id), user.id],
-        );
+        const fits =
+          !!lot &&
+          lot.status === 'available' &&
+          !lot.exposureFlagged &&
+          !new Decimal(r.held).gt(lot.quantity) &&
+          lotUsableOn({ expiresOn: lot.fefoExpiresOn, usable: true }, jobDate, margin);
+        if (fits) {
+          kept.add(r.id);
+        } else {
+          stale.push(r.id);
+        }
       }
       const held: { lotId: string; jobId: string; held: string }[] = lots.length
         ? await m.query(
             `SELECT lot_id AS "lotId", job_id AS "jobId", sum(quantity - issued_quantity)::text AS held FROM reservations
-              WHERE status = 'held' AND lot_id = ANY($1) GROUP BY lot_id, job_id`,
-            [lots.map((l) => l.id)],
+              WHERE status = 'held' AND lot_id = ANY($1) AND NOT (id = ANY($2)) GROUP BY lot_id, job_id`,
+            [lots.map((l) => l.id), mineRows.filter((r) => !kept.has(r.id)).map((r) => r.id)],
           )
         : [];
-      const heldBy = (lotId: string, mine: boolean) =>
+      const heldBy = (lotId: string, mineOnly: boolean) =>
         held
-          .filter((h) => h.lotId === lotId && (h.jobId === job.id) === mine)
-          .reduce((s, h) => s.plus(h.held), ZERO);
-      const mineHeld = lots.reduce((s, l) => s.plus(heldBy(l.id, true)), ZERO);
+          .filter((h) => h.lotId === lotId && (h.jobId === job.id) === mineOnly)
+          .reduce((sum, h) => sum.plus(h.held), ZERO);
+      const mineHeld = lots.reduce((sum, l) => sum.plus(heldBy(l.id, true)), ZERO);
       const need = Decimal.max(ZERO, n.needed.minus(mineHeld).minus(out.get(n.materialId) ?? ZERO));
       const offered: FefoLot[] = lots.map((l) => ({
         id: l.id,
@@ -258,42 +273,52 @@ export class ReservationsService {
       }));
       const result = allocateFefo(offered, need, useBy);
       for (const a of result.allocations) {
-        await m.query(
-          `INSERT INTO reservations (company_id, job_id, estimate_id, material_id, lot_id, quantity, job_date, use_by, created_by)
-           VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9)`,
-          [
-            user.companyId,
-            job.id,
-            job.acceptedEstimateId,
-            n.materialId,
-            a.lotId,
-            fmt(a.quantity),
-            job.scheduledOn,
-            useBy,
-            user.id,
-          ],
-        );
+        holds.push([
+          user.companyId,
+          job.id,
+          estimateId,
+          n.materialId,
+          a.lotId,
+          fmt(a.quantity),
+          jobDate,
+          useBy,
+          user.id,
+        ]);
       }
       if (result.shortfall.gt(0)) {
         const lead = n.leadTimeDays;
-        await m.query(
-          `INSERT INTO reservation_shortfalls (company_id, job_id, estimate_id, material_id, quantity, job_date, needed_by, lead_time_days, supplier_id, supplier_name)
-           VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10)`,
-          [
-            user.companyId,
-            job.id,
-            job.acceptedEstimateId,
-            n.materialId,
-            fmt(result.shortfall),
-            job.scheduledOn,
-            addDays(job.scheduledOn, -(lead ?? 0)),
-            lead,
-            n.supplier?.id ?? null,
-            n.supplier?.name ?? null,
-          ],
-        );
+        shortfalls.push([
+          user.companyId,
+          job.id,
+          estimateId,
+          n.materialId,
+          fmt(result.shortfall),
+          jobDate,
+          addDays(jobDate, -(lead ?? 0)),
+          lead,
+          n.supplier?.id ?? null,
+          n.supplier?.name ?? null,
+        ]);
       }
     }
+    if (stale.length) {
+      await m.query(
+        `UPDATE reservations SET status = 'released', released_at = now(), released_by = $2,
+                release_reason = 'No longer usable for the job date: reserved again' WHERE id = ANY($1)`,
+        [stale, user.id],
+      );
+    }
+    await m.query(`DELETE FROM reservation_shortfalls WHERE job_id = $1`, [job.id]);
+    await insertRows(
+      m,
+      'reservations (company_id, job_id, estimate_id, material_id, lot_id, quantity, job_date, use_by, created_by)',
+      holds,
+    );
+    await insertRows(
+      m,
+      'reservation_shortfalls (company_id, job_id, estimate_id, material_id, quantity, job_date, needed_by, lead_time_days, supplier_id, supplier_name)',
+      shortfalls,
+    );
   }
 
   /** Releases everything the job holds (on DELETE, and when it is lost or cancelled). */
@@ -523,4 +548,14 @@ export class ReservationsService {
       flagged,
     };
   }
+}
+
+/** One INSERT for many rows. */
+async function insertRows(m: EntityManager, into: string, rows: unknown[][]): Promise<void> {
+  if (rows.length === 0) {
+    return;
+  }
+  const values: unknown[] = [];
+  const tuples = rows.map((row) => `(${row.map((v) => `$${values.push(v)}`).join(', ')})`);
+  await m.query(`INSERT INTO ${into} VALUES ${tuples.join(', ')}`, values);
 }
