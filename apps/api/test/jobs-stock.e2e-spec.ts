@@ -462,6 +462,26 @@ describe('reservations, pick lists, issues, returns and the reconciliation', () 
         );
       });
 
+      it('another company gets 404 for the job’s reservations, pick list, issues, returns and reconciliation, and for its lots', async () => {
+        const other = await registerCompany(t, 'Nosy Roofing');
+        for (const path of ['reservations', 'pick-list', 'pick-list.pdf', 'reconciliation']) {
+          await t.http().get(`/api/jobs/${job.id}/${path}`).set(auth(other)).expect(404);
+        }
+        await t.http().post(`/api/jobs/${job.id}/reservations`).set(auth(other)).expect(404);
+        await t.http().delete(`/api/jobs/${job.id}/reservations`).set(auth(other)).expect(404);
+        await t.http().post(`/api/jobs/${job.id}/issues`).set(auth(other)).send({ lines: [{ lotId: lots.c, quantity: '1' }] }).expect(404);
+        await t.http().post(`/api/jobs/${job.id}/returns`).set(auth(other)).send({ lines: [{ lotId: lots.c, partQuantity: '1' }] }).expect(404);
+        const theirs = await readyJob(t, other, {
+          customerId: await createCustomer(t, other),
+          buildUpId: await createBuildUp(t, other),
+          scheduledOn: inDays(jobDay),
+          status: 'won',
+        });
+        const res = await t.http().post(`/api/jobs/${theirs.id}/issues`).set(auth(other)).send({ lines: [{ lotId: lots.c, quantity: '1' }] }).expect(404);
+        expect(res.body.message).toBe('Lot not found');
+        expect((await held(lots.c)).toString()).toBe('10');
+      });
+
       it('reconciles estimated against issued, returned and used, with the margin', async () => {
         const res = await t.http().get(`/api/jobs/${job.id}/reconciliation`).set(auth(owner)).expect(200);
         const r = res.body.materials.find((m: any) => m.material?.id === cat.resin);

@@ -75,7 +75,7 @@ describe('CostingService.matchMaterials', () => {
       Promise.resolve(catalogue.filter((m) => where.kind._value.includes(m.kind))),
     ),
   };
-  const costing = new CostingService(repo as never);
+  const costing = new CostingService(repo as never, {} as never);
   const takeoff = estimateRoof({
     areas: [{ name: 'A', lengthM: 4, widthM: 3 }],
     edges: [

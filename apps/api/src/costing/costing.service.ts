@@ -15,6 +15,7 @@ import {
 } from '@potlife/domain';
 import { EntityManager, In, Repository } from 'typeorm';
 import { Material } from '../catalogue/entities/material.entity';
+import { SuppliersService } from '../suppliers/suppliers.service';
 import { toStockUnit, UnitContext } from './units';
 
 /** What the catalogue material for a role must be like, beside its kind. */
@@ -155,7 +156,10 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
 
 @Injectable()
 export class CostingService {
-  constructor(@InjectRepository(Material) private readonly materials: Repository<Material>) {}
+  constructor(
+    @InjectRepository(Material) private readonly materials: Repository<Material>,
+    private readonly suppliers: SuppliersService,
+  ) {}
 
   private async catalogue(companyId: string, kinds: MaterialKind[], m?: EntityManager): Promise<Material[]> {
     const repo = m ? m.getRepository(Material) : this.materials;
@@ -212,8 +216,9 @@ export class CostingService {
   }
 
   /**
-   * The cheapest current price of each pack size of each material on a date: for every supplier
-   * its latest price valid on the date (the price history's rule), then the cheapest supplier.
+   * The cheapest current price of each pack size of each material on a date, from
+   * SuppliersService (each supplier's price in force on the date, cheapest first), among active
+   * suppliers, with the supplier's lead time.
    */
   async currentPrices(
     companyId: string,
@@ -225,32 +230,24 @@ export class CostingService {
     if (materialIds.length === 0) {
       return out;
     }
-    const runner = m ?? this.materials.manager;
-    const rows: {
-      material_id: string;
-      pack_size: string;
-      pack_price: string;
-      supplier_id: string;
-      supplier_name: string;
-      lead_time_days: number;
-    }[] = await runner.query(
-      `SELECT * FROM (
-           SELECT DISTINCT ON (p.material_id, p.pack_size, p.supplier_id)
-                  p.material_id, p.pack_size::text, p.pack_price::text, p.supplier_id, s.name AS supplier_name, s.lead_time_days
-             FROM supplier_prices p JOIN suppliers s ON s.id = p.supplier_id AND s.active
-            WHERE p.company_id = $1 AND p.material_id = ANY($2) AND p.valid_from <= $3
-            ORDER BY p.material_id, p.pack_size, p.supplier_id, p.valid_from DESC, p.created_at DESC
-         ) cur ORDER BY material_id, pack_size, pack_price, lead_time_days, supplier_name`,
-      [companyId, materialIds, onDate],
+    const prices = (await this.suppliers.currentPrices(companyId, materialIds, onDate, m)).filter(
+      (p) => p.supplierActive,
     );
-    for (const r of rows) {
-      const key = priceKey(r.material_id, r.pack_size);
+    const ids = [...new Set(prices.map((p) => p.supplierId))];
+    const leads: { id: string; lead: number }[] = ids.length
+      ? await (m ?? this.materials.manager).query(
+          `SELECT id, lead_time_days AS lead FROM suppliers WHERE company_id = $1 AND id = ANY($2)`,
+          [companyId, ids],
+        )
+      : [];
+    for (const p of prices) {
+      const key = priceKey(p.materialId, p.packSize);
       if (!out.has(key)) {
         out.set(key, {
-          packPrice: r.pack_price,
-          supplierId: r.supplier_id,
-          supplierName: r.supplier_name,
-          leadTimeDays: r.lead_time_days,
+          packPrice: p.packPrice,
+          supplierId: p.supplierId,
+          supplierName: p.supplierName,
+          leadTimeDays: leads.find((l) => l.id === p.supplierId)?.lead ?? 0,
         });
       }
     }

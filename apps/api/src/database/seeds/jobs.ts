@@ -4,7 +4,10 @@ import { EntityManager } from 'typeorm';
 import { defaultRates, toDomainBuildUp } from '../../build-ups/build-ups.service';
 import { BuildUpRates } from '../../build-ups/entities/build-up.entity';
 import { BuildUp } from '../../build-ups/entities/build-up.entity';
+import { CatalogueService } from '../../catalogue/catalogue.service';
 import { Material } from '../../catalogue/entities/material.entity';
+import { SupplierPricesService } from '../../suppliers/supplier-prices.service';
+import { SuppliersService } from '../../suppliers/suppliers.service';
 import { CostingService } from '../../costing/costing.service';
 import { Job, Substrate } from '../../jobs/entities/job.entity';
 import { writeEstimate } from '../../jobs/estimates.service';
@@ -419,7 +422,13 @@ export async function seedJobs(m: EntityManager, ctx: SeedContext): Promise<void
     new StockReader(),
     new IdempotencyService(m.connection),
   );
-  const costing = new CostingService(m.getRepository(Material));
+  const costing = new CostingService(
+    m.getRepository(Material),
+    new SuppliersService(
+      m.connection,
+      new SupplierPricesService(m.connection, new CatalogueService(m.connection)),
+    ),
+  );
   const reservations = new ReservationsService(
     m.connection,
     undefined as unknown as JobsService,
