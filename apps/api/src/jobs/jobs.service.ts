@@ -197,16 +197,14 @@ export class JobsService {
           createdBy: user.id,
         }),
       );
-      await m
-        .getRepository(JobStatusChange)
-        .save({
-          companyId: user.companyId,
-          jobId: job.id,
-          fromStatus: null,
-          toStatus: 'enquiry',
-          reason: null,
-          changedBy: user.id,
-        });
+      await m.getRepository(JobStatusChange).save({
+        companyId: user.companyId,
+        jobId: job.id,
+        fromStatus: null,
+        toStatus: 'enquiry',
+        reason: null,
+        changedBy: user.id,
+      });
       return job.id;
     });
     return this.get(user, id);

@@ -81,5 +81,5 @@ export function cautionsBlock(
 export function pounds(amount: string): string {
   const [whole, pence = '00'] = amount.replace('-', '').split('.');
   const grouped = (whole ?? '0').replace(/\B(?=(\d{3})+(?!\d))/g, ',');
-  return `${amount.startsWith('-') ? '−' : ''}£${grouped}.${pence.padEnd(2, '0').slice(0, 2)}`;
+  return `${amount.startsWith('-') ? '-' : ''}£${grouped}.${pence.padEnd(2, '0').slice(0, 2)}`;
 }

@@ -18,7 +18,7 @@ export async function renderPickList(p: PickListResponse, companyName: string): 
     const where =
       l.places.map((pl) => `${pl.locationName} (${pl.quantity} ${unit(l.unit)})`).join(', ') ||
       'not in stock';
-    doc.font('bold').text(`☐  ${l.quantity} ${unit(l.unit)}  ${l.material.name}`, { continued: false });
+    doc.font('bold').text(`[  ]  ${l.quantity} ${unit(l.unit)}  ${l.material.name}`, { continued: false });
     doc
       .font('body')
       .fontSize(9)
@@ -33,7 +33,7 @@ export async function renderPickList(p: PickListResponse, companyName: string): 
   if (p.unreserved.length) {
     heading(doc, 'Needed but not reserved (pick the oldest usable lot)');
     for (const u of p.unreserved) {
-      doc.text(`☐  ${u.quantity} ${unit(u.unit)}  ${u.material.name} (${u.material.code})`);
+      doc.text(`[  ]  ${u.quantity} ${unit(u.unit)}  ${u.material.name} (${u.material.code})`);
     }
   }
   if (p.issued.length) {
