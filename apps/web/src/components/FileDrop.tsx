@@ -98,7 +98,8 @@ export function FileDrop({
         maxSize={maxBytes}
         multiple={false}
         disabled={disabled}
-        inputProps={{ name: inputName, 'aria-label': `Choose ${what}` }}
+        name={inputName}
+        inputProps={{ 'aria-label': `Choose ${what}` }}
         radius="md"
         p="md"
       >

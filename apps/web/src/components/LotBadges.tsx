@@ -44,7 +44,7 @@ function LookBadge({ look, title }: { look: Look; title?: string }) {
       variant="light"
       leftSection={<IconComponent size={13} stroke={2} aria-hidden />}
       title={title}
-      styles={{ label: { textTransform: 'none', fontWeight: 700 } }}
+      styles={{ label: { textTransform: 'none', fontWeight: 700, overflow: 'visible' } }}
     >
       {look.label}
     </Badge>

@@ -336,12 +336,15 @@ export function CsvImportFlow<R extends ImportRowBase>({
                     <Badge
                       color="red"
                       leftSection={<IconAlertTriangle size={12} aria-hidden />}
-                      styles={{ label: { textTransform: 'none' } }}
+                      styles={{ label: { textTransform: 'none', overflow: 'visible' } }}
                     >
                       Problem
                     </Badge>
                   ) : (
-                    <Badge color={actionColors[row.action]} styles={{ label: { textTransform: 'none' } }}>
+                    <Badge
+                      color={actionColors[row.action]}
+                      styles={{ label: { textTransform: 'none', overflow: 'visible' } }}
+                    >
                       {actionLabels[row.action]}
                     </Badge>
                   ),
