@@ -24,29 +24,58 @@ async function navLabels(): Promise<string[]> {
     .map((link) => link.textContent ?? '');
 }
 
+// The store's screens (Receive, Stock, Counts, Temperatures), the estimator's (Jobs, Calendar,
+// Build-ups), the catalogue and suppliers, and the owner's (Users, Mail outbox).
+const OWNER_NAV = [
+  'Home',
+  'Receive',
+  'Stock',
+  'Counts',
+  'Temperatures',
+  'Jobs',
+  'Calendar',
+  'Build-ups',
+  'Catalogue',
+  'Suppliers',
+  'Users',
+  'Mail outbox',
+];
+const ESTIMATOR_NAV = ['Home', 'Stock', 'Jobs', 'Calendar', 'Build-ups', 'Catalogue', 'Suppliers'];
+const STOREMAN_NAV = [
+  'Home',
+  'Receive',
+  'Stock',
+  'Counts',
+  'Temperatures',
+  'Jobs',
+  'Calendar',
+  'Catalogue',
+  'Suppliers',
+];
+
 describe('navigation by role', () => {
   it.each([
-    ['owner', ['Home', 'Users', 'Mail outbox']],
-    ['estimator', ['Home']],
-    ['storeman', ['Home']],
+    ['owner', OWNER_NAV],
+    ['estimator', ESTIMATOR_NAV],
+    ['storeman', STOREMAN_NAV],
   ] as const)('the table gives the %s %j', (role, labels) => {
     expect(navigationFor(role).map((entry) => entry.label)).toEqual(labels);
   });
 
-  it('shows the owner Home, Users and Mail outbox, with the company, name, role and sign-out', async () => {
+  it('shows the owner every screen, with the company, name, role and sign-out', async () => {
     signInAs('owner');
     renderWithProviders(<AppRoutes />, { route: '/' });
-    expect(await navLabels()).toEqual(['Home', 'Users', 'Mail outbox']);
+    expect(await navLabels()).toEqual(OWNER_NAV);
     expect(screen.getByTestId('header-company')).toHaveTextContent('Ridgeline Flat Roofing');
     expect(screen.getByTestId('header-user')).toHaveTextContent('Dana Whitlow');
     expect(screen.getByTestId('header-user')).toHaveTextContent('Owner');
     expect(screen.getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
   });
 
-  it('shows the storeman only Home', async () => {
+  it('shows the storeman the store, jobs, catalogue and suppliers, without Users or the Mail outbox', async () => {
     signInAs('storeman');
     renderWithProviders(<AppRoutes />, { route: '/' });
-    expect(await navLabels()).toEqual(['Home']);
+    expect(await navLabels()).toEqual(STOREMAN_NAV);
     expect(screen.queryByRole('link', { name: 'Users' })).not.toBeInTheDocument();
     expect(screen.queryByRole('link', { name: 'Mail outbox' })).not.toBeInTheDocument();
   });

@@ -1,4 +1,18 @@
-import { IconCalendarEvent, IconClipboardList, IconHome2, IconMailbox, IconStack2, IconUsers, type Icon } from '@tabler/icons-react';
+import {
+  IconBooks,
+  IconCalendarEvent,
+  IconClipboardList,
+  IconHome2,
+  IconListCheck,
+  IconMailbox,
+  IconPackages,
+  IconStack2,
+  IconTemperature,
+  IconTruck,
+  IconTruckDelivery,
+  IconUsers,
+  type Icon,
+} from '@tabler/icons-react';
 import type { Role } from '../lib/roles';
 import { paths } from './paths';
 
@@ -6,7 +20,19 @@ import { paths } from './paths';
 // the rows the user's role may see, and the router guards each screen with the same roles.
 // Later screens (stock, receipts, jobs, estimates, purchase orders...) add their row here.
 
-export type NavKey = 'home' | 'users' | 'mailOutbox' | 'jobs' | 'calendar' | 'buildUps';
+export type NavKey =
+  | 'home'
+  | 'users'
+  | 'mailOutbox'
+  | 'jobs'
+  | 'calendar'
+  | 'buildUps'
+  | 'catalogue'
+  | 'suppliers'
+  | 'receipts'
+  | 'stock'
+  | 'counts'
+  | 'temperatures';
 
 export interface NavEntry {
   key: NavKey;
@@ -26,6 +52,40 @@ export const navigation: readonly NavEntry[] = [
     icon: IconHome2,
     roles: ['owner', 'estimator', 'storeman'],
     summary: 'What you do in Potlife.',
+  },
+  {
+    key: 'receipts',
+    label: 'Receive',
+    to: paths.receipts,
+    icon: IconTruckDelivery,
+    roles: ['owner', 'storeman'],
+    summary: 'Book deliveries in lot by lot, keep the delivery note and print the labels for the packs.',
+  },
+  {
+    key: 'stock',
+    label: 'Stock',
+    to: paths.stock,
+    icon: IconPackages,
+    roles: ['owner', 'estimator', 'storeman'],
+    summary:
+      'What is in the store by material, by location and lot by lot, with expiry and status; moves and write-offs.',
+  },
+  {
+    key: 'counts',
+    label: 'Counts',
+    to: paths.counts,
+    icon: IconListCheck,
+    roles: ['owner', 'storeman'],
+    summary: 'Count the shelves blind, see the differences, and (for the owner) approve them.',
+  },
+  {
+    key: 'temperatures',
+    label: 'Temperatures',
+    to: paths.temperatures,
+    icon: IconTemperature,
+    roles: ['owner', 'storeman'],
+    summary:
+      'Store readings typed in or from a logger, charted against the allowed band; lots to check before use.',
   },
   {
     key: 'jobs',
@@ -50,6 +110,23 @@ export const navigation: readonly NavEntry[] = [
     icon: IconStack2,
     roles: ['owner', 'estimator'],
     summary: 'The layers and rates roofs are priced with: mat, resin, trims, labour and markup.',
+  },
+  {
+    key: 'catalogue',
+    label: 'Catalogue',
+    to: paths.catalogue,
+    icon: IconBooks,
+    roles: ['owner', 'estimator', 'storeman'],
+    summary:
+      'Every material the company stocks: packs, shelf life, storage and hazard; CSV import and export.',
+  },
+  {
+    key: 'suppliers',
+    label: 'Suppliers',
+    to: paths.suppliers,
+    icon: IconTruck,
+    roles: ['owner', 'estimator', 'storeman'],
+    summary: 'The firms you buy from, their contacts and lead times, and their prices with history.',
   },
   {
     key: 'users',
