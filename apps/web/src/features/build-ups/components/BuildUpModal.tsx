@@ -142,7 +142,7 @@ export function BuildUpModal({ buildUp, opened, onClose, readOnly = false }: Bui
           <Stack gap="md">
             <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
               <TextInput label="Name" data-autofocus {...form.getInputProps('name')} />
-              <Textarea label="Description" autosize minRows={1} {...form.getInputProps('description')} />
+              <Textarea label="Description" rows={1} {...form.getInputProps('description')} />
             </SimpleGrid>
             <div>
               <Text fw={700}>Price</Text>

@@ -26,47 +26,49 @@ import { substrateLabels } from '../utils/labels';
 
 const optionalText = (max: number) => z.string().trim().max(max, `Keep it to ${max} characters`);
 
-export const createJobSchema = z
-  .object({
-    customerMode: z.enum(['existing', 'new']),
-    customerId: z.string().nullable(),
-    customerName: optionalText(160),
-    contactName: optionalText(120),
-    email: z.string().trim().max(320, 'Keep it to 320 characters'),
-    phone: optionalText(40),
-    billingAddress: optionalText(500),
-    title: optionalText(160),
-    siteAddress: z.string().trim().min(1, 'Enter the site address').max(500, 'Keep it to 500 characters'),
-    substrate: z.enum(SUBSTRATES, { error: 'Choose what the roof is laid on' }),
-    scheduledOn: z
-      .string()
-      .refine((v) => v === '' || /^\d{4}-\d{2}-\d{2}$/.test(v), 'Enter a date, or leave it empty'),
-    buildUpId: z.string().nullable(),
-    topcoatColour: optionalText(60),
-    crew: optionalText(160),
-    notes: optionalText(4000),
-  })
-  .superRefine((v, ctx) => {
-    if (v.customerMode === 'existing' && !v.customerId) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['customerId'],
-        message: 'Choose the customer, or add a new one',
-      });
+export const createJobSchema = z.object({
+  customerMode: z.enum(['existing', 'new']),
+  customerId: z.string().nullable(),
+  customerName: optionalText(160),
+  contactName: optionalText(120),
+  email: z.string().trim().max(320, 'Keep it to 320 characters'),
+  phone: optionalText(40),
+  billingAddress: optionalText(500),
+  title: optionalText(160),
+  siteAddress: z.string().trim().min(1, 'Enter the site address').max(500, 'Keep it to 500 characters'),
+  substrate: z.enum(SUBSTRATES, { error: 'Choose what the roof is laid on' }),
+  scheduledOn: z
+    .string()
+    .refine((v) => v === '' || /^\d{4}-\d{2}-\d{2}$/.test(v), 'Enter a date, or leave it empty'),
+  buildUpId: z.string().nullable(),
+  topcoatColour: optionalText(60),
+  crew: optionalText(160),
+  notes: optionalText(4000),
+});
+
+/** The customer's fields, which depend on whether one is chosen or added (checked with the rest). */
+export function customerErrors(v: {
+  customerMode: string;
+  customerId: string | null;
+  customerName: string;
+  email: string;
+}) {
+  const errors: Record<string, string> = {};
+  if (v.customerMode === 'existing' && !v.customerId) {
+    errors.customerId = 'Choose the customer, or add a new one';
+  }
+  if (v.customerMode === 'new') {
+    if (v.customerName.trim() === '') {
+      errors.customerName = 'Enter the customer’s name';
     }
-    if (v.customerMode === 'new') {
-      if (v.customerName.trim() === '') {
-        ctx.addIssue({ code: 'custom', path: ['customerName'], message: 'Enter the customer’s name' });
-      }
-      if (v.email.trim() !== '' && !z.email().safeParse(v.email.trim()).success) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['email'],
-          message: 'Enter a whole e-mail address, like name@example.com',
-        });
-      }
+    if (v.email.trim() !== '' && !z.email().safeParse(v.email.trim()).success) {
+      errors.email = 'Enter a whole e-mail address, like name@example.com';
     }
-  });
+  }
+  return errors;
+}
+
+const fieldsResolver = zod4Resolver(createJobSchema, { errorPriority: 'first' });
 
 type CreateJobValues = {
   customerMode: 'existing' | 'new';
@@ -117,7 +119,7 @@ interface CreateJobModalProps {
 export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalProps) {
   const form = useForm<CreateJobValues>({
     initialValues,
-    validate: zod4Resolver(createJobSchema, { errorPriority: 'first' }),
+    validate: (values) => ({ ...fieldsResolver(values), ...customerErrors(values) }),
   });
   const [search, setSearch] = useState('');
   const [debounced] = useDebouncedValue(search, 250);
@@ -233,8 +235,8 @@ export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalPro
                 <TextInput label="Phone" type="tel" {...form.getInputProps('phone')} />
                 <Textarea
                   label="Billing address"
-                  autosize
-                  minRows={2}
+
+                  rows={2}
                   style={{ gridColumn: '1 / -1' }}
                   {...form.getInputProps('billingAddress')}
                 />
@@ -244,7 +246,7 @@ export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalPro
           <Divider />
           <Stack gap="sm">
             <Text fw={700}>Site and roof</Text>
-            <Textarea label="Site address" autosize minRows={2} {...form.getInputProps('siteAddress')} />
+            <Textarea label="Site address" rows={2} {...form.getInputProps('siteAddress')} />
             <TextInput
               label="Title"
               placeholder="e.g. Rear extension flat roof"
@@ -271,7 +273,7 @@ export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalPro
               <TextInput label="Topcoat colour" {...form.getInputProps('topcoatColour')} />
               <TextInput label="Crew" {...form.getInputProps('crew')} />
             </SimpleGrid>
-            <Textarea label="Notes" autosize minRows={2} {...form.getInputProps('notes')} />
+            <Textarea label="Notes" rows={2} {...form.getInputProps('notes')} />
           </Stack>
           <Group justify="flex-end" gap="sm">
             <Button variant="default" onClick={close} disabled={busy}>

@@ -112,7 +112,7 @@ export function EditJobModal({
       <form onSubmit={submit} noValidate aria-label={`Edit ${job.reference}`}>
         <Stack gap="sm">
           <TextInput label="Title" {...form.getInputProps('title')} />
-          <Textarea label="Site address" autosize minRows={2} {...form.getInputProps('siteAddress')} />
+          <Textarea label="Site address" rows={2} {...form.getInputProps('siteAddress')} />
           <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
             <Select
               label="Laid on"
@@ -133,7 +133,7 @@ export function EditJobModal({
             <TextInput label="Topcoat colour" {...form.getInputProps('topcoatColour')} />
             <TextInput label="Crew" {...form.getInputProps('crew')} />
           </SimpleGrid>
-          <Textarea label="Notes" autosize minRows={2} {...form.getInputProps('notes')} />
+          <Textarea label="Notes" rows={2} {...form.getInputProps('notes')} />
           <Group justify="flex-end" gap="sm">
             <Button variant="default" onClick={onClose} disabled={update.isPending}>
               Cancel

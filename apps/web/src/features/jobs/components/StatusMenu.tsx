@@ -75,8 +75,8 @@ export function StatusMenu({ job }: { job: JobDetail }) {
           </Text>
           <Textarea
             label="Reason (optional)"
-            autosize
-            minRows={2}
+
+            rows={2}
             maxLength={1000}
             value={reason}
             onChange={(e) => setReason(e.currentTarget.value)}

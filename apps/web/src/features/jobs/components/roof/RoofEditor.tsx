@@ -313,8 +313,8 @@ export function RoofEditor({
                   ) : null}
                   <Textarea
                     label="Notes on the roof"
-                    autosize
-                    minRows={2}
+
+                    rows={2}
                     maxLength={2000}
                     value={draft.notes}
                     onChange={(e) => setDraft({ ...draft, notes: e.currentTarget.value })}
