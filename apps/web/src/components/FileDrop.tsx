@@ -13,8 +13,10 @@ interface FileDropProps {
   what: string;
   /** MIME types with their extensions, as react-dropzone takes them. */
   accept: Record<string, string[]>;
-  /** The types in words: "PDF, JPEG or PNG". */
+  /** The types in words, to finish "not a … file": "PDF, JPEG or PNG", "CSV". */
   typesText: string;
+  /** More about the file, shown with the types: "a photo or scan", "comma-separated, UTF-8". */
+  typesHint?: string;
   maxBytes: number;
   file: File | null;
   onFile: (file: File | null) => void;
@@ -42,6 +44,7 @@ export function FileDrop({
   what,
   accept,
   typesText,
+  typesHint,
   maxBytes,
   file,
   onFile,
@@ -118,7 +121,7 @@ export function FileDrop({
               Drop {what} here, or tap to choose it
             </Text>
             <Text size="xs" c="dimmed">
-              {typesText}, at most {formatBytes(maxBytes)}
+              A {typesText} file{typesHint ? ` (${typesHint})` : ''}, at most {formatBytes(maxBytes)}
             </Text>
           </div>
         </Group>

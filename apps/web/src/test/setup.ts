@@ -34,6 +34,14 @@ window.ResizeObserver = ResizeObserverStub;
 
 Element.prototype.scrollIntoView = function scrollIntoView() {};
 
+// Mantine's autosizing Textarea listens for web fonts loading; jsdom has no document.fonts.
+if (!('fonts' in document)) {
+  Object.defineProperty(document, 'fonts', {
+    configurable: true,
+    value: { addEventListener: () => undefined, removeEventListener: () => undefined, ready: Promise.resolve() },
+  });
+}
+
 // Downloads hand a blob URL to a link; jsdom has no blob URLs.
 URL.createObjectURL = () => 'blob:potlife-test';
 URL.revokeObjectURL = () => undefined;

@@ -188,7 +188,8 @@ export function CsvImportFlow<R extends ImportRowBase>({
       <FileDrop
         what={what}
         accept={CSV_ACCEPT}
-        typesText="A CSV file (comma-separated, UTF-8)"
+        typesText="CSV"
+        typesHint="comma-separated, UTF-8"
         maxBytes={MAX_CSV_BYTES}
         file={file}
         onFile={choose}

@@ -190,7 +190,7 @@ export function ReceiptRoute() {
             </Fact>
             <Fact label="Delivery note number">{r.deliveryNoteNumber ?? '—'}</Fact>
             <Fact label="Value">{formatMoney(r.totalValue)}</Fact>
-            <Fact label="Booked in">{formatDateTime(r.createdAt)}</Fact>
+            <Fact label="Recorded">{formatDateTime(r.createdAt)}</Fact>
           </SimpleGrid>
           {r.note ? <Fact label="Note">{r.note}</Fact> : null}
           <Title order={2} fz="lg" mt="md" mb="sm">

@@ -321,7 +321,8 @@ function ReceiveForm({
                 <FileDrop
                   what="the delivery note"
                   accept={DELIVERY_NOTE_ACCEPT}
-                  typesText="A photo or scan: PDF, JPEG or PNG"
+                  typesText="PDF, JPEG or PNG"
+                  typesHint="a photo or scan"
                   maxBytes={DELIVERY_NOTE_MAX_BYTES}
                   file={file}
                   onFile={setFile}

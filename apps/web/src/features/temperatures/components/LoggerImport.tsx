@@ -118,7 +118,7 @@ export function LoggerImport({ locationId, locationName }: { locationId: string;
       <FileDrop
         what="the logger's CSV"
         accept={CSV_ACCEPT}
-        typesText="A CSV file"
+        typesText="CSV"
         maxBytes={MAX_CSV_BYTES}
         file={file}
         onFile={(chosen) => {
