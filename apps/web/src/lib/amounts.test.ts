@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { compareDecimals, formatMoney, formatQuantity, formatSignedMoney, formatSignedQuantity } from './amounts';
+import {
+  compareDecimals,
+  formatMoney,
+  formatQuantity,
+  formatSignedMoney,
+  formatSignedQuantity,
+} from './amounts';
 
 // Display only: the API sends decimal strings; these put them the way a UK reader expects
 // (pounds with pence, thousands grouped). Common practice, no source.

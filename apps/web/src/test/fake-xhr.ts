@@ -44,7 +44,11 @@ export function installFakeXhr() {
     send(body: unknown) {
       sent.push({ method: this.method, url: this.url, headers: { ...this.headers }, body });
       const total = typeof body === 'string' ? body.length : 1000;
-      this.upload.onprogress?.({ lengthComputable: true, loaded: Math.floor(total / 2), total } as ProgressEvent);
+      this.upload.onprogress?.({
+        lengthComputable: true,
+        loaded: Math.floor(total / 2),
+        total,
+      } as ProgressEvent);
       this.upload.onprogress?.({ lengthComputable: true, loaded: total, total } as ProgressEvent);
       this.upload.onload?.();
       void fetch(this.url, {

@@ -1,5 +1,5 @@
 import { screen, waitFor, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { AppRoutes } from '../../../app/routes';
 import { setAccessToken } from '../../../lib/auth-token';
 import { installFakeXhr } from '../../../test/fake-xhr';
@@ -7,7 +7,8 @@ import { sessionUser } from '../../../test/fixtures';
 import { json, mockApi } from '../../../test/mock-api';
 import { renderWithProviders } from '../../../test/render';
 
-const CSV = 'code,name,kind,stock_unit,pack_sizes\nRES-25,Base resin,base-resin,kg,25:25 kg drum\nMAT-X,Mat,mat,m2,64:64 m² roll\n';
+const CSV =
+  'code,name,kind,stock_unit,pack_sizes\nRES-25,Base resin,base-resin,kg,25:25 kg drum\nMAT-X,Mat,mat,m2,64:64 m² roll\n';
 
 const withErrors = {
   rows: [
@@ -49,10 +50,16 @@ function csvFile(text: string) {
 }
 
 describe('catalogue import', () => {
+  // The screen is a lazy chunk: load it once before the tests, not inside the first one's wait.
+  beforeAll(() => import('./CatalogueImportRoute'));
+
   it('lists each bad row with its number and reason, and imports nothing while any is bad', async () => {
     setAccessToken('token-owner');
     const { sent } = installFakeXhr();
-    mockApi({ 'GET /api/auth/me': json(sessionUser('owner')), 'POST /api/materials/import': json(withErrors) });
+    mockApi({
+      'GET /api/auth/me': json(sessionUser('owner')),
+      'POST /api/materials/import': json(withErrors),
+    });
     const { user } = renderWithProviders(<AppRoutes />, { route: '/catalogue/import' });
 
     await user.upload(await screen.findByLabelText('Choose the catalogue CSV'), csvFile(CSV));
@@ -60,8 +67,12 @@ describe('catalogue import', () => {
     expect(await screen.findByText('1 of 2 rows have problems')).toBeInTheDocument();
     const bad = screen.getByText('MAT-X').closest('tr')!;
     expect(within(bad).getByText('3')).toBeInTheDocument();
-    expect(within(bad).getByText('mat_gsm: a mat needs its weight in g/m² (e.g. 300, 450, 600)')).toBeInTheDocument();
-    expect(within(bad).getByText('roll_width_m: a mat needs its roll width in metres (e.g. 1.04)')).toBeInTheDocument();
+    expect(
+      within(bad).getByText('mat_gsm: a mat needs its weight in g/m² (e.g. 300, 450, 600)'),
+    ).toBeInTheDocument();
+    expect(
+      within(bad).getByText('roll_width_m: a mat needs its roll width in metres (e.g. 1.04)'),
+    ).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Import 1 material' })).toBeDisabled();
 
     expect(sent).toHaveLength(1);
@@ -85,13 +96,17 @@ describe('catalogue import', () => {
 
     expect(await screen.findByText('Imported')).toBeInTheDocument();
     expect(screen.getByText(/1 new, 1 changed, 0 unchanged/)).toBeInTheDocument();
-    await waitFor(() => expect(sent.map((s) => s.url.split('?')[1])).toEqual(['mode=preview', 'mode=commit']));
+    await waitFor(() =>
+      expect(sent.map((s) => s.url.split('?')[1])).toEqual(['mode=preview', 'mode=commit']),
+    );
   });
 
   it('tells the storeman the import needs another role', async () => {
     setAccessToken('token-storeman');
     mockApi({ 'GET /api/auth/me': json(sessionUser('storeman')) });
     renderWithProviders(<AppRoutes />, { route: '/catalogue/import' });
-    expect(await screen.findByRole('heading', { name: 'This page needs the owner or estimator role' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { name: 'This page needs the owner or estimator role' }),
+    ).toBeInTheDocument();
   });
 });

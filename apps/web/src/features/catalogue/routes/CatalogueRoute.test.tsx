@@ -1,6 +1,6 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import type { UserEvent } from '@testing-library/user-event';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { AppRoutes } from '../../../app/routes';
 import { setAccessToken } from '../../../lib/auth-token';
 import type { Role } from '../../../lib/roles';
@@ -17,10 +17,17 @@ async function fill(user: UserEvent, field: HTMLElement, text: string) {
 
 function signedIn(role: Role, extra: Record<string, MockHandler> = {}) {
   setAccessToken(`token-${role}`);
-  return mockApi({ 'GET /api/auth/me': json(sessionUser(role)), 'GET /api/materials': json(page(materials)), ...extra });
+  return mockApi({
+    'GET /api/auth/me': json(sessionUser(role)),
+    'GET /api/materials': json(page(materials)),
+    ...extra,
+  });
 }
 
 describe('catalogue', () => {
+  // The screen is a lazy chunk: load it once before the tests, not inside the first one's wait.
+  beforeAll(() => import('./CatalogueRoute'));
+
   it('lists the materials and filters by kind through the API', async () => {
     const { fetchMock } = signedIn('estimator');
     const { user } = renderWithProviders(<AppRoutes />, { route: '/catalogue' });
@@ -34,7 +41,11 @@ describe('catalogue', () => {
     await user.click(screen.getByRole('combobox', { name: 'Kind' }));
     await user.click(await screen.findByRole('option', { name: 'Mat' }));
     await waitFor(() =>
-      expect(fetchMock.mock.calls.some(([url]) => String(url).includes('/materials?') && String(url).includes('kind=mat'))).toBe(true),
+      expect(
+        fetchMock.mock.calls.some(
+          ([url]) => String(url).includes('/materials?') && String(url).includes('kind=mat'),
+        ),
+      ).toBe(true),
     );
   });
 
@@ -71,7 +82,9 @@ describe('catalogue', () => {
     await fill(user, within(dialog).getByLabelText('Pack 1 name'), '48 m² roll');
     await user.click(within(dialog).getByRole('button', { name: 'Add material' }));
 
-    expect(await within(dialog).findByText('A mat needs its weight in g/m² (e.g. 300, 450, 600)')).toBeInTheDocument();
+    expect(
+      await within(dialog).findByText('A mat needs its weight in g/m² (e.g. 300, 450, 600)'),
+    ).toBeInTheDocument();
     expect(within(dialog).getByText('A mat needs its roll width in metres (e.g. 1.04)')).toBeInTheDocument();
     expect(posted).toHaveLength(0);
 
@@ -96,7 +109,11 @@ describe('catalogue', () => {
 
   it("puts the API's refusal beside the field it names", async () => {
     signedIn('owner', {
-      'POST /api/materials': apiError(409, 'The code RES-25 is already used by another material; codes are unique in the company', 'duplicate_code'),
+      'POST /api/materials': apiError(
+        409,
+        'The code RES-25 is already used by another material; codes are unique in the company',
+        'duplicate_code',
+      ),
     });
     const { user } = renderWithProviders(<AppRoutes />, { route: '/catalogue' });
     await user.click(await screen.findByRole('button', { name: 'Add a material' }));

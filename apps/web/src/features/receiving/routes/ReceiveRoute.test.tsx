@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { UserEvent } from '@testing-library/user-event';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { AppRoutes } from '../../../app/routes';
 import { setAccessToken } from '../../../lib/auth-token';
 import { installFakeXhr } from '../../../test/fake-xhr';
@@ -115,6 +115,9 @@ function setUp(extra: Parameters<typeof mockApi>[0] = {}) {
 }
 
 describe('receiving a delivery', () => {
+  // The screen is a lazy chunk: load it once before the tests, not inside the first one's wait.
+  beforeAll(() => import('./ReceiveRoute'));
+
   it('checks the lines before anything is sent', async () => {
     const posted: MockRequest[] = [];
     setUp({ 'POST /api/receipts': (request) => (posted.push(request), json(receipt, 201)) });
