@@ -6,6 +6,7 @@ import { navigationFor } from '../../../config/navigation';
 import { paths } from '../../../config/paths';
 import { withArticle } from '../../../lib/roles';
 import { useSessionUser } from '../../../lib/session';
+import { EstimatorPanel } from '../components/EstimatorPanel';
 import { roleIntros } from '../components/role-intros';
 
 function greeting(now: Date): string {
@@ -86,6 +87,7 @@ export function HomeRoute() {
           )}
         </Card>
       </SimpleGrid>
+      {user.role === 'estimator' ? <EstimatorPanel /> : null}
     </Stack>
   );
 }

@@ -108,7 +108,7 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
 
   return (
     <Grid gap="lg">
-      <Grid.Col span={{ base: 12, lg: 8 }}>
+      <Grid.Col span={{ base: 12, xl: 8 }}>
         <Stack gap="md">
           {roofUnsaved ? (
             <Alert
@@ -211,7 +211,7 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
           )}
         </Stack>
       </Grid.Col>
-      <Grid.Col span={{ base: 12, lg: 4 }}>
+      <Grid.Col span={{ base: 12, xl: 4 }}>
         <LayingCheckCard />
       </Grid.Col>
     </Grid>

@@ -8,6 +8,9 @@ import type { JobDetail } from '../../api/types';
 import { PickListPanel } from './PickListPanel';
 import { ReservationsPanel } from './ReservationsPanel';
 import { ReturnsPanel } from './ReturnsPanel';
+import { statusLabels } from '../../utils/labels';
+
+const ISSUABLE: readonly string[] = ['won', 'scheduled', 'in-progress'];
 
 interface MaterialsTabProps {
   job: JobDetail;
@@ -21,6 +24,8 @@ export function MaterialsTab({ job, role, onGoToEstimate, onEditJob }: Materials
   const reservations = useReservations(job.id);
   const pickList = usePickList(job.id);
   const store = role === 'storeman' || role === 'owner';
+  // The API sends stock only to work that is going ahead.
+  const issuing = ISSUABLE.includes(job.status);
 
   if (reservations.isPending) {
     return <PageLoader label="Loading the materials…" />;
@@ -36,7 +41,16 @@ export function MaterialsTab({ job, role, onGoToEstimate, onEditJob }: Materials
     );
   }
   const pick = pickList.isSuccess ? (
-    <PickListPanel job={job} pickList={pickList.data} canIssue={store} />
+    <PickListPanel
+      job={job}
+      pickList={pickList.data}
+      canIssue={store && issuing}
+      issueNote={
+        store && !issuing
+          ? `Stock goes out once the job is won, scheduled or in progress; it is ${statusLabels[job.status].toLowerCase()}.`
+          : null
+      }
+    />
   ) : pickList.isError ? (
     <QueryError
       what="the pick list"

@@ -47,10 +47,12 @@ interface PickListPanelProps {
   job: JobDetail;
   pickList: PickList;
   canIssue: boolean;
+  /** why the storeman cannot issue yet, if they cannot */
+  issueNote?: string | null;
 }
 
 /** The storeman's pick list lot by lot, printable; ticking lines and issuing them sends them to site. */
-export function PickListPanel({ job, pickList, canIssue }: PickListPanelProps) {
+export function PickListPanel({ job, pickList, canIssue, issueNote = null }: PickListPanelProps) {
   const print = useDownloadPickList();
   const issue = useIssueMaterials(job.id);
   const [rows, setRows] = useState<Record<string, IssueRow>>(() => rowsFor(pickList.lines));
@@ -143,6 +145,11 @@ export function PickListPanel({ job, pickList, canIssue }: PickListPanelProps) {
           </Button>
         </Group>
 
+        {issueNote && pickList.lines.length > 0 ? (
+          <Text size="sm" c="orange.9">
+            {issueNote}
+          </Text>
+        ) : null}
         {pickList.lines.length === 0 ? (
           <Text size="sm" c="dimmed">
             Nothing left to pick from reserved lots.

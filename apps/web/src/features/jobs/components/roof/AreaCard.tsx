@@ -275,7 +275,9 @@ export function AreaCard({
                       <Table.Td>
                         <Group gap={6} wrap="nowrap">
                           <EdgeSample style={styleOf(side.kind)} />
-                          <Text size="sm">{name}</Text>
+                          <Text size="sm" style={{ whiteSpace: 'nowrap' }}>
+                            {name}
+                          </Text>
                         </Group>
                       </Table.Td>
                       <Table.Td>

@@ -70,8 +70,8 @@ export function RoofTab({ job, canEdit, onDirtyChange }: RoofTabProps) {
   const closed = CLOSED_STATUSES.includes(job.status);
   return (
     <RoofEditor
-      // A fresh working copy when another roof arrives (after a save elsewhere).
-      key={`${job.id}:${roof.data.updatedAt ?? 'new'}`}
+      // One working copy per job: a save keeps the editor (it takes the saved roof itself).
+      key={job.id}
       jobId={job.id}
       record={roof.data}
       upstandM={buildUp.data?.upstandM}
