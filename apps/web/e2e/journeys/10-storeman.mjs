@@ -18,7 +18,12 @@ async function choose(page, field, option) {
 export const journeys = {
   'the storeman receives two lots with a delivery note, prints their labels and counts them; the owner approves':
     async ({ page, context, shot }) => {
-      const stamp = Date.now().toString(36).toUpperCase();
+      // A full-page shot of a scrolled page draws the fixed header half-way down: scroll up first.
+    const snap = async (label) => {
+      await page.evaluate(() => window.scrollTo(0, 0));
+      await shot(label);
+    };
+    const stamp = Date.now().toString(36).toUpperCase();
       const bay = `Count bay ${stamp}`;
       const matBatch = `CS30-${stamp}`;
       const tapeBatch = `BT-${stamp}`;
@@ -26,7 +31,7 @@ export const journeys = {
       await signIn(page, 'storeman@demo.test');
       await page.getByRole('heading', { name: /Good (morning|afternoon|evening)/ }).waitFor();
       await page.getByRole('region', { name: 'Expiring within 30 days' }).waitFor();
-      await shot('01-home');
+      await snap('01-home');
 
       // A location of its own, so the count covers only what this journey put there.
       await page.getByRole('navigation').getByRole('link', { name: 'Stock' }).click();
@@ -38,7 +43,7 @@ export const journeys = {
       await choose(page, locationDialog.getByRole('combobox', { name: 'Inside' }), /^Main store$/);
       await locationDialog.getByRole('button', { name: 'Add location' }).click();
       await page.getByRole('cell', { name: `Main store › ${bay}` }).waitFor();
-      await shot('02-location-added');
+      await snap('02-location-added');
 
       // The delivery: two lines, two lots, with the delivery note as a file.
       await page.getByRole('navigation').getByRole('link', { name: 'Receive' }).click();
@@ -69,11 +74,11 @@ export const journeys = {
         (await line2.getByRole('combobox', { name: 'Put away at' }).inputValue()).includes(bay),
         'the second line should start at the first line’s location',
       );
-      await shot('03-receive-form');
+      await snap('03-receive-form');
 
       await page.getByRole('button', { name: 'Check and book in' }).click();
       await page.getByRole('heading', { name: 'Check the delivery' }).waitFor();
-      await shot('04-receive-check');
+      await snap('04-receive-check');
       await page.getByRole('button', { name: 'Book it in' }).click();
       await page.getByRole('heading', { name: /^Receipt \d+$/ }).waitFor({ timeout: 20_000 });
       await page.getByText('Booked in', { exact: true }).first().waitFor();
@@ -86,7 +91,7 @@ export const journeys = {
         await page.getByRole('link', { name: tapeBatch }).isVisible(),
         'the receipt should link to the tape lot',
       );
-      await shot('05-receipt');
+      await snap('05-receipt');
 
       // The labels: the PDF comes from the API and opens in a tab of its own. The route hands the
       // answer on unchanged and keeps a copy to check.
@@ -115,7 +120,7 @@ export const journeys = {
       if (tab) {
         await tab.close();
       }
-      await shot('06-labels-printed');
+      await snap('06-labels-printed');
 
       // The count: blind entry, the mat as expected, the tape two metres short.
       await page.getByRole('navigation').getByRole('link', { name: 'Counts' }).click();
@@ -135,7 +140,7 @@ export const journeys = {
       );
       await page.getByLabel(new RegExp(`^Counted Chopped strand mat 300 g/m² ${matBatch}`)).fill('199.68');
       await page.getByLabel(new RegExp(`^Counted Glass bandage tape 100 mm ${tapeBatch}`)).fill('148');
-      await shot('07-count-entry');
+      await snap('07-count-entry');
       await page.getByRole('button', { name: 'Submit' }).click();
       await page
         .getByRole('dialog', { name: /^Submit count \d+\?$/ })
@@ -148,14 +153,14 @@ export const journeys = {
         (await page.getByRole('row').filter({ hasText: 'Less than expected' }).count()) === 1,
         'exactly one line should be short',
       );
-      await shot('08-count-submitted');
+      await snap('08-count-submitted');
       await signOut(page);
 
       // The owner approves: the difference is posted as an adjustment.
       await signIn(page, 'owner@demo.test');
       await page.goto(countUrl);
       await page.getByRole('heading', { name: 'Your decision' }).waitFor();
-      await shot('09-owner-reviews');
+      await snap('09-owner-reviews');
       await page.getByRole('button', { name: /^Approve and post 1 adjustment$/ }).click();
       await page
         .getByRole('dialog', { name: /^Approve count \d+\?$/ })
@@ -163,6 +168,6 @@ export const journeys = {
         .click();
       await page.getByRole('heading', { name: 'Adjustments posted' }).waitFor();
       expect(await page.getByText('−2 m').first().isVisible(), 'the adjustment should take 2 m off the tape');
-      await shot('10-count-approved');
+      await snap('10-count-approved');
     },
 };

@@ -145,6 +145,7 @@ function MaterialForm({
             />
             <TextInput label="Name" {...form.getInputProps('name')} />
             <Select
+              size="md"
               label="Kind"
               placeholder="Choose a kind"
               data={kindOptions}
@@ -152,6 +153,7 @@ function MaterialForm({
               {...form.getInputProps('kind')}
             />
             <Select
+              size="md"
               label="Stock unit"
               description="What quantities are counted in"
               placeholder="Choose a unit"
@@ -233,6 +235,7 @@ function MaterialForm({
               {kind === 'trim' ? (
                 <>
                   <Select
+                    size="md"
                     label="Trim kind"
                     placeholder="Choose"
                     data={trimOptions}
@@ -290,7 +293,12 @@ function MaterialForm({
 
         <Section title="Hazard">
           <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
-            <Select label="Hazard class" data={hazardOptions} {...form.getInputProps('hazardClass')} />
+            <Select
+              size="md"
+              label="Hazard class"
+              data={hazardOptions}
+              {...form.getInputProps('hazardClass')}
+            />
             {hazardous ? (
               <TextInput
                 label="UN number"
@@ -301,6 +309,7 @@ function MaterialForm({
             ) : null}
             {hazardous && values.hazardClass !== '5.2' && values.hazardClass !== '2' ? (
               <Select
+                size="md"
                 label="Packing group"
                 data={packingGroupOptions}
                 {...form.getInputProps('packingGroup')}

@@ -2,14 +2,14 @@ import { Badge, Button, Card, Group, SimpleGrid, Stack, Text, Title } from '@man
 import { useDisclosure } from '@mantine/hooks';
 import { modals } from '@mantine/modals';
 import { notifications } from '@mantine/notifications';
-import { IconArchive, IconArrowBackUp, IconArrowLeft, IconPencil } from '@tabler/icons-react';
+import { IconArchive, IconArrowBackUp, IconArrowLeft, IconPackages, IconPencil } from '@tabler/icons-react';
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { CautionsList } from '../../../components/CautionsList';
 import { PageHeader } from '../../../components/PageHeader';
 import { PageLoader } from '../../../components/PageLoader';
 import { QueryError } from '../../../components/QueryError';
-import { paths } from '../../../config/paths';
+import { hrefs, paths } from '../../../config/paths';
 import { formatQuantity } from '../../../lib/amounts';
 import { formatDateTime } from '../../../lib/format';
 import { hazardClassLabels, materialKindLabel, trimKindLabels, unitLabel } from '../../../lib/material-words';
@@ -117,6 +117,14 @@ export function MaterialRoute() {
               leftSection={<IconArrowLeft size={18} />}
             >
               Catalogue
+            </Button>
+            <Button
+              component={Link}
+              to={hrefs.stockView('lot', { material: m.id })}
+              variant="default"
+              leftSection={<IconPackages size={18} />}
+            >
+              Its lots in stock
             </Button>
             {canEdit ? (
               <>

@@ -63,6 +63,7 @@ function FoundLotForm({ count, onClose }: { count: Count; onClose: () => void })
         data-autofocus
       />
       <Select
+        size="md"
         label="Lot"
         placeholder={
           debounced.trim().length < 2
@@ -81,6 +82,7 @@ function FoundLotForm({ count, onClose }: { count: Count; onClose: () => void })
         nothingFoundMessage="No lot matches"
       />
       <Select
+        size="md"
         label="Where it is"
         data={inScope.map((l) => ({ value: l.id, label: l.path }))}
         value={locationId}

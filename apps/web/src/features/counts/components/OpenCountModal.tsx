@@ -62,6 +62,7 @@ function OpenCountForm({ onClose }: { onClose: () => void }) {
           of the counted locations until the count is approved or cancelled.
         </Text>
         <Select
+          size="md"
           label="What to count"
           data={[
             { value: '', label: 'Everything, every location' },

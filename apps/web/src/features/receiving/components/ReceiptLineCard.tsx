@@ -57,6 +57,7 @@ export function ReceiptLineCard({ form, index, materials, locations, canRemove }
           </ActionIcon>
         </Group>
         <Select
+          size="md"
           label="Material"
           placeholder="Choose a material"
           searchable
@@ -92,6 +93,7 @@ export function ReceiptLineCard({ form, index, materials, locations, canRemove }
             {...form.getInputProps(at('expiresOn'))}
           />
           <Select
+            size="md"
             label="Pack"
             placeholder={material ? 'Choose a pack' : 'Choose the material first'}
             disabled={!material}
@@ -129,6 +131,7 @@ export function ReceiptLineCard({ form, index, materials, locations, canRemove }
             {...form.getInputProps(at('unitCost'))}
           />
           <Select
+            size="md"
             label="Put away at"
             placeholder="Choose a location"
             searchable

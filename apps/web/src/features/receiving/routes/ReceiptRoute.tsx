@@ -258,8 +258,10 @@ export function ReceiptRoute() {
                         '0'
                       )}
                     </Table.Td>
-                    <Table.Td ta="right">{formatQuantity(line.quantity, line.stockUnit)}</Table.Td>
-                    <Table.Td ta="right">
+                    <Table.Td ta="right" style={{ whiteSpace: 'nowrap' }}>
+                      {formatQuantity(line.quantity, line.stockUnit)}
+                    </Table.Td>
+                    <Table.Td ta="right" style={{ whiteSpace: 'nowrap' }}>
                       {formatMoney(line.unitCost)} / {unitLabel(line.stockUnit)}
                     </Table.Td>
                     <Table.Td ta="right">{formatMoney(line.value)}</Table.Td>

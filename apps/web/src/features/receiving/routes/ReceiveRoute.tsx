@@ -302,6 +302,7 @@ function ReceiveForm({
               <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="sm">
                 {form.values.supplierMode === 'listed' ? (
                   <Select
+                    size="md"
                     label="Supplier"
                     placeholder="Choose the supplier"
                     searchable

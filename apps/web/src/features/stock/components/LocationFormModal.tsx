@@ -150,6 +150,7 @@ function LocationForm({
         <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
           <TextInput label="Name" data-autofocus {...form.getInputProps('name')} />
           <Select
+            size="md"
             label="Kind"
             placeholder="Choose a kind"
             data={kindOptions}
@@ -157,6 +158,7 @@ function LocationForm({
           />
         </SimpleGrid>
         <Select
+          size="md"
           label="Inside"
           description="The store or bay it is part of (counts and cabinets include what is inside them)"
           data={[
@@ -175,6 +177,7 @@ function LocationForm({
           />
         ) : null}
         <MultiSelect
+          size="md"
           label="Hazard classes it may hold"
           description="Left empty: the usual for its kind (peroxide only in a peroxide store, flammables away from it, nothing dangerous outdoors)"
           data={classOptions}

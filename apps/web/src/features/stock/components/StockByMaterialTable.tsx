@@ -96,6 +96,7 @@ export function StockByMaterialTable({
             accessor: 'materialCode',
             title: 'Code',
             sortable: true,
+            noWrap: true,
             render: (row) => (
               <Text size="sm" ff="monospace" fw={700}>
                 {row.materialCode}
@@ -124,6 +125,7 @@ export function StockByMaterialTable({
             accessor: 'usableQuantity',
             title: 'Usable',
             sortable: true,
+            visibleMediaQuery: '(min-width: 48em)',
             textAlign: 'right',
             render: (row) => formatQuantity(row.usableQuantity, row.stockUnit),
           },

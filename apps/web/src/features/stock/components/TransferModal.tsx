@@ -109,6 +109,7 @@ function TransferForm({ lot, onClose }: { lot: Lot; onClose: () => void }) {
     >
       <Stack gap="md">
         <Select
+          size="md"
           label="From"
           data={lot.places.map((place) => ({
             value: place.locationId,
@@ -117,6 +118,7 @@ function TransferForm({ lot, onClose }: { lot: Lot; onClose: () => void }) {
           {...form.getInputProps('fromLocationId')}
         />
         <Select
+          size="md"
           label="To"
           placeholder={locations.isPending ? 'Loading locations…' : 'Choose a location'}
           searchable

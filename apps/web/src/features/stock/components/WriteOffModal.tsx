@@ -125,6 +125,7 @@ function WriteOffForm({ lot, onClose }: { lot: Lot; onClose: () => void }) {
     >
       <Stack gap="md">
         <Select
+          size="md"
           label="Where"
           data={lot.places.map((p) => ({
             value: p.locationId,

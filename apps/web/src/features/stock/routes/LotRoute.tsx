@@ -27,7 +27,7 @@ import { ExpiryBadge, LotBadges } from '../../../components/LotBadges';
 import { PageHeader } from '../../../components/PageHeader';
 import { PageLoader } from '../../../components/PageLoader';
 import { QueryError } from '../../../components/QueryError';
-import { hrefs, paths } from '../../../config/paths';
+import { hrefs } from '../../../config/paths';
 import { formatMoney, formatQuantity, signOf } from '../../../lib/amounts';
 import { formatDate, formatDateTime } from '../../../lib/format';
 import { hazardShort, materialKindLabel, unitLabel } from '../../../lib/material-words';
@@ -240,11 +240,6 @@ export function LotRoute() {
           </Title>
           <LotMovementsTable lotId={l.id} canChange={canChange} />
         </Card>
-        <Text size="xs" c="dimmed">
-          <Anchor component={Link} to={paths.stock} size="xs">
-            Back to the stock
-          </Anchor>
-        </Text>
       </Stack>
       {canChange ? (
         <>

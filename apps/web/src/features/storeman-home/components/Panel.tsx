@@ -67,7 +67,7 @@ export function PanelItem({
   badge?: ReactNode;
 }) {
   return (
-    <Group justify="space-between" wrap="nowrap" gap="xs" align="flex-start">
+    <Group justify="space-between" wrap="wrap" gap="xs" align="flex-start">
       <Stack gap={0} style={{ minWidth: 0 }}>
         <Anchor component={Link} to={to} size="sm" fw={600}>
           {title}

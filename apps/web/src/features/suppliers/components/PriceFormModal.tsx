@@ -106,6 +106,7 @@ function PriceForm({ supplierId, supplierName, onClose, initial }: Omit<PriceFor
           VAT.
         </Text>
         <Select
+          size="md"
           label="Material"
           placeholder={materials.isPending ? 'Loading materials…' : 'Choose a material'}
           searchable
@@ -128,6 +129,7 @@ function PriceForm({ supplierId, supplierName, onClose, initial }: Omit<PriceFor
         ) : null}
         <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
           <Select
+            size="md"
             label="Pack"
             placeholder={material ? 'Choose a pack' : 'Choose the material first'}
             disabled={!material}

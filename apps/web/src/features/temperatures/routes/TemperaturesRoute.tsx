@@ -75,6 +75,7 @@ export function TemperaturesRoute() {
         <Stack gap="lg">
           <Group gap="sm" wrap="wrap" align="flex-end">
             <Select
+              size="md"
               label="Location"
               data={active.map((l) => ({ value: l.id, label: l.path }))}
               value={chosen.id}
