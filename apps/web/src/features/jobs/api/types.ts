@@ -379,3 +379,32 @@ export interface SiteMovement {
   lines: SiteMovementLine[];
   warnings: string[];
 }
+
+export interface ReconciliationMaterial {
+  material: Named | null;
+  roles: string[];
+  unit: string;
+  estimatedQuantity: string;
+  estimatedPacks: string | null;
+  estimatedCost: string | null;
+  issued: string;
+  returned: string;
+  used: string;
+  /** used − estimated quantity */
+  variance: string;
+  actualCost: string;
+}
+
+export interface Reconciliation {
+  jobId: string;
+  estimate: { id: string; version: number } | null;
+  materials: ReconciliationMaterial[];
+  totals: {
+    price: string | null;
+    estimatedMaterials: string | null;
+    actualMaterials: string;
+    labour: string | null;
+    margin: string | null;
+    marginPct: string | null;
+  };
+}

@@ -7,6 +7,7 @@ import { useReservations } from '../../api/get-reservations';
 import type { JobDetail } from '../../api/types';
 import { PickListPanel } from './PickListPanel';
 import { ReservationsPanel } from './ReservationsPanel';
+import { ReconciliationPanel } from './ReconciliationPanel';
 import { ReturnsPanel } from './ReturnsPanel';
 import { statusLabels } from '../../utils/labels';
 
@@ -74,7 +75,24 @@ export function MaterialsTab({ job, role, onGoToEstimate, onEditJob }: Materials
     <ReturnsPanel job={job} reservations={reservations.data} pickList={pickList.data} canReturn={store} />
   );
 
-  // The storeman's work first for the storeman.
+  // Once something has gone out, the estimate can be held against what was used (prices: not for the storeman).
+  const anyIssued = (pickList.data?.issued ?? []).some((i) => Number(i.issued) > 0);
+  const compared =
+    role !== 'storeman' && anyIssued && reservations.data.estimate !== null ? (
+      <ReconciliationPanel jobId={job.id} />
+    ) : null;
+
+  // A finished job is about what it used; the storeman's work first for the storeman.
+  if (job.status === 'complete' || job.status === 'invoiced') {
+    return (
+      <Stack gap="md">
+        {compared}
+        {returns}
+        {reserved}
+        {pick}
+      </Stack>
+    );
+  }
   return role === 'storeman' ? (
     <Stack gap="md">
       {pick}
@@ -86,6 +104,7 @@ export function MaterialsTab({ job, role, onGoToEstimate, onEditJob }: Materials
       {reserved}
       {pick}
       {returns}
+      {compared}
     </Stack>
   );
 }

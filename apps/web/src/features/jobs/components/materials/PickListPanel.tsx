@@ -226,7 +226,8 @@ export function PickListPanel({ job, pickList, canIssue, issueNote = null }: Pic
           </Stack>
         )}
 
-        {pickList.unreserved.length > 0 ? (
+        {pickList.unreserved.length > 0 &&
+        !['complete', 'invoiced', 'lost', 'cancelled'].includes(job.status) ? (
           <Alert color="orange" variant="light" title="Needed but not reserved">
             {pickList.unreserved.map((u) => (
               <Text size="sm" key={u.material.id}>

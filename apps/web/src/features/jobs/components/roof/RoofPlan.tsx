@@ -208,9 +208,11 @@ export function RoofPlan({
                   const from = view.toPx(side.from);
                   const to = view.toPx(side.to);
                   const outward = { x: side.outward.x, y: -side.outward.y };
+                  // Clear of a wall's hatching.
+                  const off = side.kind === 'wall' ? 28 : 16;
                   const mid = {
-                    x: (from.x + to.x) / 2 + outward.x * 16,
-                    y: (from.y + to.y) / 2 + outward.y * 16,
+                    x: (from.x + to.x) / 2 + outward.x * off,
+                    y: (from.y + to.y) / 2 + outward.y * off,
                   };
                   return (
                     <g key={side.index}>
