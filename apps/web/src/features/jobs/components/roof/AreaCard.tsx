@@ -255,68 +255,70 @@ export function AreaCard({
             <Text size="sm" fw={600}>
               Edges of this area
             </Text>
-            <Table verticalSpacing={4} horizontalSpacing="xs">
-              <Table.Thead>
-                <Table.Tr>
-                  <Table.Th>Side</Table.Th>
-                  <Table.Th>Length</Table.Th>
-                  <Table.Th>Kind</Table.Th>
-                  <Table.Th>Upstand (m)</Table.Th>
-                </Table.Tr>
-              </Table.Thead>
-              <Table.Tbody>
-                {area.sides.map((side, i) => {
-                  const name =
-                    area.shape === 'rectangle'
-                      ? (RECTANGLE_SIDES[i] ?? `Side ${i + 1}`)
-                      : `${i + 1} → ${((i + 1) % area.sides.length) + 1}`;
-                  return (
-                    <Table.Tr key={i}>
-                      <Table.Td>
-                        <Group gap={6} wrap="nowrap">
-                          <EdgeSample style={styleOf(side.kind)} />
-                          <Text size="sm" style={{ whiteSpace: 'nowrap' }}>
-                            {name}
-                          </Text>
-                        </Group>
-                      </Table.Td>
-                      <Table.Td>
-                        <Text size="sm">{formatLength(lengths[i] ?? null)}</Text>
-                      </Table.Td>
-                      <Table.Td miw={150}>
-                        <Select
-                          size="xs"
-                          aria-label={`Kind of ${label} side ${name}`}
-                          placeholder="Choose…"
-                          data={SIDE_KIND_OPTIONS}
-                          value={side.kind}
-                          error={errorOf(paths.side(area.key, i))}
-                          onChange={(v) => setSide(i, (v as EdgeKind | 'none' | null) ?? null)}
-                          comboboxProps={{ withinPortal: true }}
-                        />
-                      </Table.Td>
-                      <Table.Td w={110}>
-                        {side.kind === 'wall' ? (
-                          <TextInput
+            <Table.ScrollContainer minWidth={440} type="native">
+              <Table verticalSpacing={4} horizontalSpacing="xs">
+                <Table.Thead>
+                  <Table.Tr>
+                    <Table.Th>Side</Table.Th>
+                    <Table.Th>Length</Table.Th>
+                    <Table.Th>Kind</Table.Th>
+                    <Table.Th>Upstand (m)</Table.Th>
+                  </Table.Tr>
+                </Table.Thead>
+                <Table.Tbody>
+                  {area.sides.map((side, i) => {
+                    const name =
+                      area.shape === 'rectangle'
+                        ? (RECTANGLE_SIDES[i] ?? `Side ${i + 1}`)
+                        : `${i + 1} → ${((i + 1) % area.sides.length) + 1}`;
+                    return (
+                      <Table.Tr key={i}>
+                        <Table.Td>
+                          <Group gap={6} wrap="nowrap">
+                            <EdgeSample style={styleOf(side.kind)} />
+                            <Text size="sm" style={{ whiteSpace: 'nowrap' }}>
+                              {name}
+                            </Text>
+                          </Group>
+                        </Table.Td>
+                        <Table.Td>
+                          <Text size="sm">{formatLength(lengths[i] ?? null)}</Text>
+                        </Table.Td>
+                        <Table.Td miw={150}>
+                          <Select
                             size="xs"
-                            aria-label={`Upstand of ${label} side ${name}`}
-                            placeholder="build-up's"
-                            inputMode="decimal"
-                            value={side.upstandM}
-                            error={errorOf(paths.sideUpstand(area.key, i), side.upstandM)}
-                            onChange={(e) => setSide(i, 'wall', e.currentTarget.value)}
+                            aria-label={`Kind of ${label} side ${name}`}
+                            placeholder="Choose…"
+                            data={SIDE_KIND_OPTIONS}
+                            value={side.kind}
+                            error={errorOf(paths.side(area.key, i))}
+                            onChange={(v) => setSide(i, (v as EdgeKind | 'none' | null) ?? null)}
+                            comboboxProps={{ withinPortal: true }}
                           />
-                        ) : (
-                          <Text size="xs" c="dimmed">
-                            —
-                          </Text>
-                        )}
-                      </Table.Td>
-                    </Table.Tr>
-                  );
-                })}
-              </Table.Tbody>
-            </Table>
+                        </Table.Td>
+                        <Table.Td w={110}>
+                          {side.kind === 'wall' ? (
+                            <TextInput
+                              size="xs"
+                              aria-label={`Upstand of ${label} side ${name}`}
+                              placeholder="build-up's"
+                              inputMode="decimal"
+                              value={side.upstandM}
+                              error={errorOf(paths.sideUpstand(area.key, i), side.upstandM)}
+                              onChange={(e) => setSide(i, 'wall', e.currentTarget.value)}
+                            />
+                          ) : (
+                            <Text size="xs" c="dimmed">
+                              —
+                            </Text>
+                          )}
+                        </Table.Td>
+                      </Table.Tr>
+                    );
+                  })}
+                </Table.Tbody>
+              </Table>
+            </Table.ScrollContainer>
           </Stack>
         ) : null}
 

@@ -26,84 +26,86 @@ export function FreeEdgesCard({ edges, errorOf, onChange }: FreeEdgesCardProps) 
           </Text>
         </div>
         {edges.length > 0 ? (
-          <Table verticalSpacing={4} horizontalSpacing="xs">
-            <Table.Thead>
-              <Table.Tr>
-                <Table.Th>Kind</Table.Th>
-                <Table.Th>Length (m)</Table.Th>
-                <Table.Th>Upstand (m)</Table.Th>
-                <Table.Th>Where</Table.Th>
-                <Table.Th w={40} />
-              </Table.Tr>
-            </Table.Thead>
-            <Table.Tbody>
-              {edges.map((edge, i) => (
-                <Table.Tr key={edge.key}>
-                  <Table.Td miw={150}>
-                    <Group gap={6} wrap="nowrap">
-                      <EdgeSample style={EDGE_STYLES[edge.kind]} />
-                      <Select
-                        size="xs"
-                        aria-label={`Kind of other edge ${i + 1}`}
-                        data={EDGE_KIND_OPTIONS}
-                        value={edge.kind}
-                        allowDeselect={false}
-                        onChange={(v) => v && update(edge.key, { kind: v as EdgeKind })}
-                        comboboxProps={{ withinPortal: true }}
-                      />
-                    </Group>
-                  </Table.Td>
-                  <Table.Td>
-                    <TextInput
-                      size="xs"
-                      aria-label={`Length of other edge ${i + 1}`}
-                      inputMode="decimal"
-                      value={edge.lengthM}
-                      error={errorOf(paths.edgeLength(edge.key), edge.lengthM)}
-                      onChange={(e) => update(edge.key, { lengthM: e.currentTarget.value })}
-                    />
-                  </Table.Td>
-                  <Table.Td>
-                    {edge.kind === 'wall' ? (
+          <Table.ScrollContainer minWidth={560} type="native">
+            <Table verticalSpacing={4} horizontalSpacing="xs">
+              <Table.Thead>
+                <Table.Tr>
+                  <Table.Th>Kind</Table.Th>
+                  <Table.Th>Length (m)</Table.Th>
+                  <Table.Th>Upstand (m)</Table.Th>
+                  <Table.Th>Where</Table.Th>
+                  <Table.Th w={40} />
+                </Table.Tr>
+              </Table.Thead>
+              <Table.Tbody>
+                {edges.map((edge, i) => (
+                  <Table.Tr key={edge.key}>
+                    <Table.Td miw={150}>
+                      <Group gap={6} wrap="nowrap">
+                        <EdgeSample style={EDGE_STYLES[edge.kind]} />
+                        <Select
+                          size="xs"
+                          aria-label={`Kind of other edge ${i + 1}`}
+                          data={EDGE_KIND_OPTIONS}
+                          value={edge.kind}
+                          allowDeselect={false}
+                          onChange={(v) => v && update(edge.key, { kind: v as EdgeKind })}
+                          comboboxProps={{ withinPortal: true }}
+                        />
+                      </Group>
+                    </Table.Td>
+                    <Table.Td>
                       <TextInput
                         size="xs"
-                        aria-label={`Upstand of other edge ${i + 1}`}
-                        placeholder="build-up's"
+                        aria-label={`Length of other edge ${i + 1}`}
                         inputMode="decimal"
-                        value={edge.upstandM}
-                        error={errorOf(paths.edgeUpstand(edge.key), edge.upstandM)}
-                        onChange={(e) => update(edge.key, { upstandM: e.currentTarget.value })}
+                        value={edge.lengthM}
+                        error={errorOf(paths.edgeLength(edge.key), edge.lengthM)}
+                        onChange={(e) => update(edge.key, { lengthM: e.currentTarget.value })}
                       />
-                    ) : (
-                      <Text size="xs" c="dimmed">
-                        —
-                      </Text>
-                    )}
-                  </Table.Td>
-                  <Table.Td>
-                    <TextInput
-                      size="xs"
-                      aria-label={`Where other edge ${i + 1} runs`}
-                      placeholder="e.g. gutter side"
-                      maxLength={80}
-                      value={edge.label}
-                      onChange={(e) => update(edge.key, { label: e.currentTarget.value })}
-                    />
-                  </Table.Td>
-                  <Table.Td>
-                    <ActionIcon
-                      variant="subtle"
-                      color="red"
-                      aria-label={`Remove other edge ${i + 1}`}
-                      onClick={() => onChange(edges.filter((e) => e.key !== edge.key))}
-                    >
-                      <IconTrash size={16} />
-                    </ActionIcon>
-                  </Table.Td>
-                </Table.Tr>
-              ))}
-            </Table.Tbody>
-          </Table>
+                    </Table.Td>
+                    <Table.Td>
+                      {edge.kind === 'wall' ? (
+                        <TextInput
+                          size="xs"
+                          aria-label={`Upstand of other edge ${i + 1}`}
+                          placeholder="build-up's"
+                          inputMode="decimal"
+                          value={edge.upstandM}
+                          error={errorOf(paths.edgeUpstand(edge.key), edge.upstandM)}
+                          onChange={(e) => update(edge.key, { upstandM: e.currentTarget.value })}
+                        />
+                      ) : (
+                        <Text size="xs" c="dimmed">
+                          —
+                        </Text>
+                      )}
+                    </Table.Td>
+                    <Table.Td>
+                      <TextInput
+                        size="xs"
+                        aria-label={`Where other edge ${i + 1} runs`}
+                        placeholder="e.g. gutter side"
+                        maxLength={80}
+                        value={edge.label}
+                        onChange={(e) => update(edge.key, { label: e.currentTarget.value })}
+                      />
+                    </Table.Td>
+                    <Table.Td>
+                      <ActionIcon
+                        variant="subtle"
+                        color="red"
+                        aria-label={`Remove other edge ${i + 1}`}
+                        onClick={() => onChange(edges.filter((e) => e.key !== edge.key))}
+                      >
+                        <IconTrash size={16} />
+                      </ActionIcon>
+                    </Table.Td>
+                  </Table.Tr>
+                ))}
+              </Table.Tbody>
+            </Table>
+          </Table.ScrollContainer>
         ) : null}
         <Group>
           <Button
