@@ -294,7 +294,11 @@ export function CsvImportFlow<R extends ImportRowBase>({
                 disabled={summary.invalid > 0 || changes === 0}
                 onClick={() => void run('commit', file)}
               >
-                {changes === 0 && summary.invalid === 0 ? 'Nothing to import' : commitLabel(summary)}
+                {summary.invalid > 0
+                  ? 'Fix the rows first'
+                  : changes === 0
+                    ? 'Nothing to import'
+                    : commitLabel(summary)}
               </Button>
             ) : null}
           </Group>

@@ -22,6 +22,7 @@ import { IconPlus, IconTrash } from '@tabler/icons-react';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { useState, type ReactNode } from 'react';
 import { splitFieldErrors } from '../../../lib/field-errors';
+import { scrollToFirstError } from '../../../lib/scroll-to-error';
 import {
   hazardClassLabels,
   materialKindLabels,
@@ -108,29 +109,32 @@ function MaterialForm({
   const unit = values.stockUnit ? unitLabel(values.stockUnit) : 'stock unit';
   const hazardous = values.hazardClass !== 'none';
 
-  const submit = form.onSubmit((formValues) => {
-    setOtherError(null);
-    save.mutate(
-      { id: material?.id, body: materialBodyOf(formValues, material?.active ?? true) },
-      {
-        onSuccess: (saved) => {
-          notifications.show({
-            color: 'green',
-            message: material
-              ? `${saved.code} ${saved.name} is saved.`
-              : `${saved.code} ${saved.name} is in the catalogue.`,
-          });
-          onSaved?.(saved);
-          onClose();
+  const submit = form.onSubmit(
+    (formValues) => {
+      setOtherError(null);
+      save.mutate(
+        { id: material?.id, body: materialBodyOf(formValues, material?.active ?? true) },
+        {
+          onSuccess: (saved) => {
+            notifications.show({
+              color: 'green',
+              message: material
+                ? `${saved.code} ${saved.name} is saved.`
+                : `${saved.code} ${saved.name} is in the catalogue.`,
+            });
+            onSaved?.(saved);
+            onClose();
+          },
+          onError: (error) => {
+            const split = splitFieldErrors(error, MATERIAL_FORM_FIELDS, { duplicate_code: 'code' });
+            form.setErrors(split.fields);
+            setOtherError(split.other);
+          },
         },
-        onError: (error) => {
-          const split = splitFieldErrors(error, MATERIAL_FORM_FIELDS, { duplicate_code: 'code' });
-          form.setErrors(split.fields);
-          setOtherError(split.other);
-        },
-      },
-    );
-  });
+      );
+    },
+    () => scrollToFirstError(title),
+  );
 
   return (
     <form onSubmit={submit} noValidate aria-label={title}>

@@ -233,52 +233,60 @@ export const materialSchema = z
     litresPerKg: decimal('litres per kg', { positive: true, scale: 4 }),
     notes: z.string().max(2000, 'Keep the notes to 2000 characters'),
   })
-  .superRefine((values, ctx) => {
-    const add = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
-    if (values.kind === 'mat') {
-      if (values.matGsm.trim() === '') {
-        add('matGsm', 'A mat needs its weight in g/m² (e.g. 300, 450, 600)');
+  .superRefine(
+    (values, ctx) => {
+      const add = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
+      if (values.kind === 'mat') {
+        if (values.matGsm.trim() === '') {
+          add('matGsm', 'A mat needs its weight in g/m² (e.g. 300, 450, 600)');
+        }
+        if (values.rollWidthM.trim() === '') {
+          add('rollWidthM', 'A mat needs its roll width in metres (e.g. 1.04)');
+        }
       }
-      if (values.rollWidthM.trim() === '') {
-        add('rollWidthM', 'A mat needs its roll width in metres (e.g. 1.04)');
+      if (values.kind === 'trim') {
+        if (values.trimKind === '') {
+          add('trimKind', 'A trim needs its kind: drip, kerb, wall or angle');
+        }
+        if (values.trimLengthM.trim() === '') {
+          add('trimLengthM', 'A trim needs its length in metres (e.g. 3)');
+        }
       }
-    }
-    if (values.kind === 'trim') {
-      if (values.trimKind === '') {
-        add('trimKind', 'A trim needs its kind: drip, kerb, wall or angle');
+      if (values.hazardClass !== 'none' && values.unNumber.trim() === '') {
+        add(
+          'unNumber',
+          `A class ${values.hazardClass} material needs its UN number (four digits, from its safety data sheet)`,
+        );
       }
-      if (values.trimLengthM.trim() === '') {
-        add('trimLengthM', 'A trim needs its length in metres (e.g. 3)');
+      const min = values.storageMinC.trim();
+      const max = values.storageMaxC.trim();
+      if (
+        decimalPattern(true, 1).test(min) &&
+        decimalPattern(true, 1).test(max) &&
+        new Decimal(min).gt(max)
+      ) {
+        add('storageMaxC', `Must not be below the minimum (${min} °C)`);
       }
-    }
-    if (values.hazardClass !== 'none' && values.unNumber.trim() === '') {
-      add(
-        'unNumber',
-        `A class ${values.hazardClass} material needs its UN number (four digits, from its safety data sheet)`,
-      );
-    }
-    const min = values.storageMinC.trim();
-    const max = values.storageMaxC.trim();
-    if (decimalPattern(true, 1).test(min) && decimalPattern(true, 1).test(max) && new Decimal(min).gt(max)) {
-      add('storageMaxC', `Must not be below the minimum (${min} °C)`);
-    }
-    const seen = new Map<string, number>();
-    values.packSizes.forEach((pack, index) => {
-      const size = pack.size.trim();
-      if (!decimalPattern(false, 3).test(size)) {
-        return;
-      }
-      const key = new Decimal(size).toString();
-      if (seen.has(key)) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['packSizes', index, 'size'],
-          message: `The pack size ${key} is already listed`,
-        });
-      }
-      seen.set(key, index);
-    });
-  });
+      const seen = new Map<string, number>();
+      values.packSizes.forEach((pack, index) => {
+        const size = pack.size.trim();
+        if (!decimalPattern(false, 3).test(size)) {
+          return;
+        }
+        const key = new Decimal(size).toString();
+        if (seen.has(key)) {
+          ctx.addIssue({
+            code: 'custom',
+            path: ['packSizes', index, 'size'],
+            message: `The pack size ${key} is already listed`,
+          });
+        }
+        seen.set(key, index);
+      });
+      // Run even when a field above is wrong, so every problem shows at once.
+    },
+    { when: () => true },
+  );
 
 const orNull = (value: string) => (value.trim() === '' ? null : value.trim());
 

@@ -73,7 +73,7 @@ describe('catalogue import', () => {
     expect(
       within(bad).getByText('roll_width_m: a mat needs its roll width in metres (e.g. 1.04)'),
     ).toBeInTheDocument();
-    expect(screen.getByRole('button', { name: 'Import 1 material' })).toBeDisabled();
+    expect(screen.getByRole('button', { name: 'Fix the rows first' })).toBeDisabled();
 
     expect(sent).toHaveLength(1);
     expect(sent[0]?.url).toContain('/api/materials/import?mode=preview');

@@ -27,6 +27,7 @@ import { hrefs, paths } from '../../../config/paths';
 import { errorMessage } from '../../../lib/api-client';
 import { formatQuantity } from '../../../lib/amounts';
 import { splitFieldErrors } from '../../../lib/field-errors';
+import { scrollToFirstError } from '../../../lib/scroll-to-error';
 import { newIdempotencyKey } from '../../../lib/upload';
 import { useCreateReceipt } from '../api/create-receipt';
 import { useUploadDeliveryNote } from '../api/delivery-note';
@@ -278,7 +279,10 @@ function ReceiveForm({
             setError(null);
             setStage({ name: 'confirm' });
           },
-          () => setError('Some fields need a change: see the ones marked in red.'),
+          () => {
+            setError('Some fields need a change: see the ones marked in red.');
+            scrollToFirstError('Receive a delivery');
+          },
         )}
       >
         <Stack gap="lg" maw={960}>

@@ -189,6 +189,7 @@ export function PricesCard({ supplier, canEdit }: { supplier: Supplier; canEdit:
                 accessor: 'materialCode',
                 title: 'Code',
                 sortable: true,
+                noWrap: true,
                 render: (price) => (
                   <Text size="sm" ff="monospace" fw={600}>
                     {price.materialCode}
