@@ -1,5 +1,5 @@
 import { DEFAULT_BUILD_UP } from '@potlife/domain';
-import { screen, waitFor, within } from '@testing-library/react';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { AppRoutes } from '../../../app/routes';
 import { setAccessToken } from '../../../lib/auth-token';
@@ -48,26 +48,24 @@ describe('build-ups', () => {
     expect(await within(dialog).findByText(/Name the build-up/)).toBeInTheDocument();
     expect(within(dialog).getAllByText('Enter a value')).toHaveLength(2);
 
-    await user.type(within(dialog).getByLabelText('Name'), 'Walkway, two layers');
-    await user.type(within(dialog).getByLabelText('Labour rate (£ an hour)'), '34.50');
-    await user.type(within(dialog).getByLabelText('Markup (%)'), '30');
+    fireEvent.change(within(dialog).getByLabelText('Name'), { target: { value: 'Walkway, two layers' } });
+    fireEvent.change(within(dialog).getByLabelText('Labour rate (£ an hour)'), {
+      target: { value: '34.50' },
+    });
+    fireEvent.change(within(dialog).getByLabelText('Markup (%)'), { target: { value: '30' } });
     const layers = within(dialog).getByLabelText('Layers of mat');
-    await user.clear(layers);
-    await user.type(layers, '12');
+    fireEvent.change(layers, { target: { value: '12' } });
     await user.click(within(dialog).getByRole('button', { name: 'Create build-up' }));
     expect(await within(dialog).findByText('From 1 to 10 layers')).toBeInTheDocument();
-    await user.clear(layers);
-    await user.type(layers, '2');
+    fireEvent.change(layers, { target: { value: '2' } });
 
     // Catalyst bands out of order are the domain's refusal, shown before anything is sent.
     const firstFrom = within(dialog).getByRole('textbox', { name: 'Band 1 from (°C)' });
-    await user.clear(firstFrom);
-    await user.type(firstFrom, '40');
+    fireEvent.change(firstFrom, { target: { value: '40' } });
     await user.click(within(dialog).getByRole('button', { name: 'Create build-up' }));
     expect(await within(dialog).findByText('The build-up does not hold together')).toBeInTheDocument();
     expect(posts).toHaveLength(0);
-    await user.clear(firstFrom);
-    await user.type(firstFrom, '5');
+    fireEvent.change(firstFrom, { target: { value: '5' } });
 
     await user.click(within(dialog).getByRole('button', { name: 'Create build-up' }));
     await waitFor(() => expect(posts).toHaveLength(1));
@@ -113,6 +111,33 @@ describe('build-ups', () => {
     expect(within(dialog).queryByRole('button', { name: /Save|Create/ })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'New build-up' })).not.toBeInTheDocument();
   });
+
+  it('lets the owner set the expiry margin for reservations and how long a quote holds', async () => {
+    const patches: MockRequest[] = [];
+    setAccessToken('token');
+    mockApi({
+      'GET /api/auth/me': json(sessionUser('owner')),
+      'GET /api/build-ups': json([standard]),
+      'GET /api/settings/jobs': json({ reservationMarginDays: 7, quoteValidityDays: 30, updatedAt: null }),
+      'PATCH /api/settings/jobs': (request) => {
+        patches.push(request);
+        return json({ reservationMarginDays: 14, quoteValidityDays: 30, updatedAt: '2026-05-05T10:00:00Z' });
+      },
+    });
+    const { user } = renderWithProviders(<AppRoutes />, { route: '/build-ups' });
+    const card = await screen.findByRole('region', { name: 'Reservations and quotes' });
+    const margin = within(card).getByLabelText('Expiry margin (days)');
+    await waitFor(() => expect(margin).toHaveValue('7'));
+    await user.clear(margin);
+    await user.type(margin, '400');
+    await user.click(within(card).getByRole('button', { name: 'Save' }));
+    expect(await within(card).findByText('A whole number of days from 0 to 365')).toBeInTheDocument();
+    await user.clear(margin);
+    await user.type(margin, '14');
+    await user.click(within(card).getByRole('button', { name: 'Save' }));
+    await waitFor(() => expect(patches).toHaveLength(1));
+    expect(patches[0]?.body).toEqual({ reservationMarginDays: 14, quoteValidityDays: 30 });
+  }, 30_000);
 
   it('fills the form from a saved build-up', () => {
     expect(valuesOf(standard).catalystBands).toEqual(

@@ -12,6 +12,7 @@ import { useSessionUser } from '../../../lib/session';
 import { useBuildUps, type BuildUp } from '../api/get-build-ups';
 import { useSaveBuildUp } from '../api/save-build-up';
 import { BuildUpModal } from '../components/BuildUpModal';
+import { JobSettingsCard } from '../components/JobSettingsCard';
 
 const PAGE_SIZES = [10, 25, 50];
 
@@ -257,6 +258,9 @@ export function BuildUpsRoute() {
             ]}
           />
         )}
+      </Stack>
+      <Stack mt="lg">
+        <JobSettingsCard canEdit={owner} />
       </Stack>
       <BuildUpModal buildUp={editing} opened={opened} onClose={() => setOpened(false)} readOnly={!owner} />
     </>

@@ -25,6 +25,7 @@ import { useJob } from '../api/get-job';
 import { DocumentsTab } from '../components/DocumentsTab';
 import { EditJobModal } from '../components/EditJobModal';
 import { JobStatusBadge, MaterialStateBadge } from '../components/JobStatusBadge';
+import { StatusHistory } from '../components/StatusHistory';
 import { StatusMenu } from '../components/StatusMenu';
 import { EstimateTab } from '../components/estimate/EstimateTab';
 import { MaterialsTab } from '../components/materials/MaterialsTab';
@@ -152,6 +153,7 @@ export function JobRoute() {
           </Text>
         ) : null}
       </Paper>
+      <StatusHistory history={j.statusHistory} />
 
       <Tabs value={tab} onChange={(v) => v && go(v as Tab)} keepMounted={false}>
         <Tabs.List>

@@ -37,6 +37,7 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
   const [buildUpId, setBuildUpId] = useState<string | null>(job.buildUp?.id ?? null);
   const [airC, setAirC] = useState('');
   const [airError, setAirError] = useState<string | null>(null);
+  const [note, setNote] = useState('');
   const [chosen, setChosen] = useState<number | null>(null);
 
   const versions = estimates.data ?? [];
@@ -56,10 +57,15 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
     }
     setAirError(null);
     create.mutate(
-      { ...(buildUpId ? { buildUpId } : {}), ...(air !== '' ? { airC: air } : {}) },
+      {
+        ...(buildUpId ? { buildUpId } : {}),
+        ...(air !== '' ? { airC: air } : {}),
+        ...(note.trim() !== '' ? { note: note.trim() } : {}),
+      },
       {
         onSuccess: (made) => {
           setChosen(made.version);
+          setNote('');
           notifications.show({
             color: 'green',
             title: `Version ${made.version} made`,
@@ -165,6 +171,14 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
                     error={airError}
                     onChange={(e) => setAirC(e.currentTarget.value)}
                     w={160}
+                  />
+                  <TextInput
+                    label="Note"
+                    placeholder="e.g. with the porch"
+                    maxLength={2000}
+                    value={note}
+                    onChange={(e) => setNote(e.currentTarget.value)}
+                    w={{ base: '100%', sm: 220 }}
                   />
                   <Button
                     leftSection={<IconCalculator size={18} />}
