@@ -27,6 +27,7 @@ import { ExpiryBadge, LotBadges } from '../../../components/LotBadges';
 import { PageHeader } from '../../../components/PageHeader';
 import { PageLoader } from '../../../components/PageLoader';
 import { QueryError } from '../../../components/QueryError';
+import { rolesFor } from '../../../config/navigation';
 import { hrefs } from '../../../config/paths';
 import { formatMoney, formatQuantity, signOf } from '../../../lib/amounts';
 import { formatDate, formatDateTime } from '../../../lib/format';
@@ -94,9 +95,13 @@ export function LotRoute() {
               <>
                 {' '}
                 on{' '}
-                <Anchor component={Link} to={hrefs.receipt(l.receiptId)} size="sm">
-                  receipt {l.receiptNumber}
-                </Anchor>
+                {rolesFor('receipts').includes(user.role) ? (
+                  <Anchor component={Link} to={hrefs.receipt(l.receiptId)} size="sm">
+                    receipt {l.receiptNumber}
+                  </Anchor>
+                ) : (
+                  `receipt ${l.receiptNumber}`
+                )}
               </>
             ) : null}
             .
