@@ -67,3 +67,11 @@ describe('parseLoggerCsv', () => {
     expect(() => parseLoggerCsv('when,reading\n1,2\n', NOW)).toThrow(/found: when, reading/);
   });
 });
+
+describe('logger headings', () => {
+  // Logger exports spell the same heading many ways; common trade practice, no source.
+  it.each(['Temp °C', 'temp (°C)', 'TEMP_°C', 'Temperature (C)', ' temperature '])('reads "%s" as the temperature column', (heading) => {
+    const out = parseLoggerCsv(`Timestamp,${heading}\n2025-06-01T07:00:00Z,21.5\n`, NOW);
+    expect(out.readings.map((r) => r.temperatureC)).toEqual(['21.50']);
+  });
+});

@@ -13,7 +13,7 @@ export const PLAUSIBLE_C = { min: -60, max: 100 };
 export const MAX_ROWS = 50_000;
 
 const TIME_HEADERS = ['timestamp', 'time', 'datetime', 'date/time', 'date time', 'date_time', 'taken at', 'taken_at', 'recorded', 'date'];
-const TEMP_HEADERS = ['temperature', 'temp', 'temperature_c', 'temperature (c)', 'temperature (°c)', 'temp (°c)', 'temp_c', '°c', 'c', 'celsius', 'value'];
+const TEMP_HEADERS = ['temperature', 'temp', 'temperature_c', 'temperature (c)', 'temperature (°c)', 'temp (°c)', 'temp °c', 'temp_c', '°c', 'c', 'celsius', 'value'];
 
 export interface ParsedRow {
   row: number;
@@ -29,7 +29,11 @@ export interface ParsedCsv {
 
 export class CsvShapeError extends Error {}
 
-const norm = (h: string) => h.replace(/^\uFEFF/, '').trim().toLowerCase();
+// Headings are compared folded: case, spaces, underscores and brackets do not count, so
+// "Temp °C", "temp (°C)" and "TEMP_°C" are one heading.
+const norm = (h: string) => h.replace(/^\uFEFF/, '').toLowerCase().replace(/[\s_()[\]]+/g, '');
+const TIME_KEYS = TIME_HEADERS.map(norm);
+const TEMP_KEYS = TEMP_HEADERS.map(norm);
 
 /**
  * A moment from a logger's timestamp: ISO 8601 with a time zone as written; "YYYY-MM-DD HH:mm[:ss]"
@@ -89,8 +93,8 @@ export function parseLoggerCsv(csv: string, now: Date = new Date()): ParsedCsv {
   const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false, delimiter });
   const data = parsed.data;
   const header = (data[0] ?? []).map(norm);
-  const ti = header.findIndex((h) => TIME_HEADERS.includes(h));
-  const ci = header.findIndex((h, i) => i !== ti && TEMP_HEADERS.includes(h));
+  const ti = header.findIndex((h) => TIME_KEYS.includes(h));
+  const ci = header.findIndex((h, i) => i !== ti && TEMP_KEYS.includes(h));
   if (ti < 0 || ci < 0) {
     throw new CsvShapeError(
       `the first line must name a timestamp column and a temperature column (e.g. "timestamp,temperature"); found: ${header.filter(Boolean).join(', ') || 'nothing'}`,
