@@ -31,6 +31,7 @@ describe('the public contract of issue 3', () => {
     'cautionsFor',
     'workingTimeHint',
     'toDecimal',
+    'costFromStock',
   ])('exports %s', (name) => {
     expect(typeof (domain as Record<string, unknown>)[name]).toBe('function');
   });

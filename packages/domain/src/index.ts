@@ -80,6 +80,9 @@ export type {
   CountVariance,
 } from './stock';
 
+export { costFromStock } from './stock-cost';
+export type { CostedLot, StockPart, StockCostSplit } from './stock-cost';
+
 export { valueInventory } from './valuation';
 export type { ValuationMethod, CostLayer, Valuation } from './valuation';
 
