@@ -115,6 +115,24 @@ const RECEIPTS: DemoReceipt[] = [
       { code: 'MAT-450', kind: 'mat', packs: 2, packSize: '66.56', unitCost: '1.9500', to: 'bayB', batch: 'CS45-1102' },
     ],
   },
+  {
+    // After the warm afternoon in the peroxide store: this catalyst is not flagged, so the
+    // nearer demo jobs can hold all they need. The walkway job stays short on purpose.
+    deliveryNote: 'TV-DEMO-0005',
+    supplier: 1,
+    daysAgo: 2,
+    lines: [
+      { code: 'CAT-MEKP', kind: 'catalyst', packs: 12, packSize: '1', unitCost: '9.1000', to: 'peroxide', batch: 'PX-2411-318' },
+      { code: 'TOP-GRY', kind: 'topcoat', packs: 3, packSize: '20', unitCost: '4.5000', to: 'bayA', batch: 'TC-2411-061' },
+      { code: 'CRN-EXT', kind: 'trim', packs: 16, packSize: '1', unitCost: '6.8000', to: 'shelfB1' },
+      { code: 'CRN-INT', kind: 'trim', packs: 4, packSize: '1', unitCost: '6.8000', to: 'shelfB1' },
+      { code: 'TRM-WALL', kind: 'trim', packs: 10, packSize: '1', unitCost: '13.4000', to: 'shelfB1' },
+      { code: 'TRM-KERB', kind: 'trim', packs: 10, packSize: '1', unitCost: '12.2500', to: 'shelfB1' },
+      { code: 'OUT-110', kind: 'outlet', packs: 4, packSize: '1', unitCost: '14.9000', to: 'shelfB1' },
+      { code: 'ADH-PU', kind: 'adhesive', packs: 6, packSize: '1', unitCost: '6.4000', to: 'shelfB1', batch: 'PU-2411-2' },
+      { code: 'BAT-47', kind: 'batten', packs: 10, packSize: '4.8', unitCost: '0.9500', to: 'outdoor' },
+    ],
+  },
 ];
 
 /** Base temperature and daily swing per location, °C: an unheated UK lock-up in autumn (invented). */
