@@ -7,6 +7,7 @@ import { paths } from '../../../config/paths';
 import { withArticle } from '../../../lib/roles';
 import { useSessionUser } from '../../../lib/session';
 import { EstimatorPanel } from '../components/EstimatorPanel';
+import { OwnerStorePanel } from '../components/OwnerStorePanel';
 import { roleIntros } from '../components/role-intros';
 
 function greeting(now: Date): string {
@@ -87,6 +88,12 @@ export function HomeRoute() {
           )}
         </Card>
       </SimpleGrid>
+      {user.role === 'owner' ? (
+        <SimpleGrid cols={{ base: 1, md: 2 }} spacing="lg">
+          <OwnerStorePanel />
+          <EstimatorPanel />
+        </SimpleGrid>
+      ) : null}
       {user.role === 'estimator' ? <EstimatorPanel /> : null}
     </Stack>
   );

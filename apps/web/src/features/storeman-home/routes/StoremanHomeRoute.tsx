@@ -18,7 +18,7 @@ import { hrefs, paths } from '../../../config/paths';
 import { formatQuantity } from '../../../lib/amounts';
 import { formatDate, formatDateTime } from '../../../lib/format';
 import { useSessionUser } from '../../../lib/session';
-import { useOverview } from '../api/get-overview';
+import { useOverview } from '../../../lib/stock-overview';
 import { Panel, PanelItem } from '../components/Panel';
 
 function greeting(now: Date): string {

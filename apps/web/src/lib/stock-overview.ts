@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ExpiryValue } from '../../../components/LotBadges';
-import { apiGet } from '../../../lib/api-client';
+import type { ExpiryValue } from '../components/LotBadges';
+import { apiGet } from './api-client';
 
-// GET /api/stock/overview: what the storeman's home lists (apps/api/src/stock/dto/stock.dto.ts).
+// GET /api/stock/overview: what the storeman’s home and the owner’s home list (apps/api/src/stock/dto/stock.dto.ts).
 
 export interface OverviewLot {
   id: string;
