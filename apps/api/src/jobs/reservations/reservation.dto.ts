@@ -164,6 +164,39 @@ export interface PickListLine {
   flags: { code: ReservationFlagCode; message: string }[];
 }
 
+export type PickListLotFlagCode = 'expires-within-margin' | 'exposure-flagged' | 'held-for-other-jobs';
+
+/** A lot that could go to the job now for a need that was not reserved. */
+export interface PickListCandidate {
+  lot: { id: string; batchNumber: string | null; expiresOn: string | null };
+  /** the lot's balance over all locations */
+  onHand: string;
+  /** on hand less what other jobs hold and what this job's reserved lines hold: the most it may give */
+  free: string;
+  /** what allocateFefo takes of this lot for the outstanding need (the suggestion), or null */
+  suggested: string | null;
+  places: { locationId: string; locationName: string; quantity: string }[];
+}
+
+/** A lot of the material that is in stock but is not offered, and why (quarantined and expired ones are left out). */
+export interface PickListPassedOver {
+  lot: { id: string; batchNumber: string | null; expiresOn: string | null };
+  onHand: string;
+  flags: { code: PickListLotFlagCode; message: string }[];
+}
+
+export interface PickListUnreserved {
+  material: { id: string; code: string; name: string };
+  unit: string;
+  /** still outstanding: needed − held − issued */
+  quantity: string;
+  /** in FEFO order (allocateFefo), usable and in date on useBy, with free quantity */
+  candidates: PickListCandidate[];
+  /** what the suggestion cannot cover from usable stock */
+  short: string;
+  passedOver: PickListPassedOver[];
+}
+
 export interface PickListResponse {
   jobId: string;
   reference: string;
@@ -172,8 +205,11 @@ export interface PickListResponse {
   jobDate: string | null;
   crew: string | null;
   lines: PickListLine[];
-  /** needed but not reserved: pick from any usable lot, FEFO */
-  unreserved: { material: { id: string; code: string; name: string }; unit: string; quantity: string }[];
+  /** the day the lots must still be usable on: the later of today and the job date, + the owner's margin */
+  useBy: string;
+  marginDays: number;
+  /** needed but not reserved: pick from a lot that could go to this job now, FEFO */
+  unreserved: PickListUnreserved[];
   issued: { material: { id: string; name: string }; unit: string; issued: string; returned: string }[];
   cautions: Caution[];
 }
@@ -219,11 +255,27 @@ export interface ReconciliationResponse {
   jobId: string;
   estimate: { id: string; version: number } | null;
   materials: ReconciliationMaterial[];
+  /** hours: the estimate's against those the crew recorded (GET /api/jobs/:id/labour) */
+  labour: {
+    /** recorded once any hours are recorded; until then the estimate's labour stands in */
+    basis: 'recorded' | 'estimate';
+    estimatedHours: string | null;
+    recordedHours: string;
+    /** entries that count (struck-out ones do not) */
+    entries: number;
+    /** £ per hour, the accepted estimate's */
+    rate: string | null;
+    estimatedCost: string | null;
+    /** recorded hours × rate, to the penny (null with no estimate or no hours) */
+    recordedCost: string | null;
+  };
   totals: {
     price: string | null;
     estimatedMaterials: string | null;
     actualMaterials: string;
+    /** the labour in the margin: recorded hours × the estimate's rate, or the estimate's labour */
     labour: string | null;
+    labourBasis: 'recorded' | 'estimate';
     /** price − actual materials − labour */
     margin: string | null;
     marginPct: string | null;

@@ -1,6 +1,15 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { cautionsFor, Decimal, MaterialKind, roundMoney } from '@potlife/domain';
+import {
+  allocateFefo,
+  cautionsFor,
+  Decimal,
+  FefoLot,
+  lotUsableOn,
+  MaterialKind,
+  roundMoney,
+} from '@potlife/domain';
+import dayjs from 'dayjs';
 import { DataSource, EntityManager } from 'typeorm';
 import type { AuthUser } from '../../common/current-user';
 import { RuleViolation } from '../../common/http-exception.filter';
@@ -10,9 +19,13 @@ import { Job, jobReference } from '../entities/job.entity';
 import { JobsService } from '../jobs.service';
 import {
   IssueDto,
+  PickListCandidate,
+  PickListPassedOver,
   PickListResponse,
+  PickListUnreserved,
   ReconciliationMaterial,
   ReconciliationResponse,
+  ReservationsResponse,
   ReturnDto,
   SiteMovementLine,
   SiteMovementResponse,
@@ -20,6 +33,8 @@ import {
 import { ReservationsService } from './reservations.service';
 
 const ZERO = new Decimal(0);
+/** allocateFefo's stand-in expiry for a lot that never expires (as StockService.lockLotsForMaterial). */
+const NO_EXPIRY = '9999-12-31';
 
 /** Stock goes to site from won until the job is complete; it comes back until it is invoiced. */
 const ISSUABLE: readonly string[] = ['won', 'scheduled', 'in-progress'];
@@ -360,6 +375,7 @@ export class SiteStockService {
           moved.map((x) => x.materialId),
         ])
       : [];
+    const { useBy, unreserved } = await this.unreservedNeeds(m, user.companyId, job, view, locations);
     const kinds = new Set<MaterialKind>([
       ...lines.map((l) => l.material.kind),
       ...view.materials.map((x) => mat(x.material.id).kind),
@@ -372,9 +388,9 @@ export class SiteStockService {
       jobDate: job.scheduledOn,
       crew: job.crew,
       lines,
-      unreserved: view.materials
-        .filter((x) => new Decimal(x.outstanding).gt(0))
-        .map((x) => ({ material: x.material, unit: x.unit, quantity: x.outstanding })),
+      useBy,
+      marginDays: view.marginDays,
+      unreserved,
       issued: moved.map((x) => {
         const n = movedNames.find((y) => y.id === x.materialId);
         return {
@@ -386,6 +402,151 @@ export class SiteStockService {
       }),
       cautions: cautionsFor([...kinds]),
     };
+  }
+
+  /**
+   * For each need that was not reserved, the lots that could go to the job now: what the domain's
+   * allocateFefo would take from, in its order (usable: available and not exposure-flagged; in date
+   * on the later of today and the job date + the owner's margin), each with its free quantity (on
+   * hand less what other jobs hold and what this job's reserved lines hold: the issue route takes
+   * no more than on hand less other jobs' holds) and places, and the FEFO suggestion for the
+   * outstanding quantity marked. Lots it passes over that the storeman may wonder about (flagged,
+   * expiring within the margin, all held for other jobs) are listed with why, not offered;
+   * quarantined, written-off and expired ones are left out.
+   */
+  private async unreservedNeeds(
+    m: EntityManager,
+    companyId: string,
+    job: Job,
+    view: ReservationsResponse,
+    locations: { id: string; name: string }[],
+  ): Promise<{ useBy: string; unreserved: PickListUnreserved[] }> {
+    const today = dayjs().format('YYYY-MM-DD');
+    const from = job.scheduledOn && job.scheduledOn > today ? job.scheduledOn : today;
+    const useBy = dayjs(from).add(view.marginDays, 'day').format('YYYY-MM-DD');
+    const needs = view.materials.filter((x) => new Decimal(x.outstanding).gt(0));
+    if (needs.length === 0) {
+      return { useBy, unreserved: [] };
+    }
+    const lots: {
+      id: string;
+      materialId: string;
+      batchNumber: string | null;
+      expiresOn: string | null;
+      status: string;
+      exposureFlagged: boolean;
+      quantity: string;
+    }[] = await m.query(
+      `SELECT id, material_id AS "materialId", batch_number AS "batchNumber", expires_on::text AS "expiresOn", status,
+              exposure_flagged AS "exposureFlagged", quantity::text AS quantity
+         FROM lots WHERE company_id = $1 AND material_id = ANY($2) AND quantity > 0
+        ORDER BY coalesce(expires_on, 'infinity'::date), received_on, id`,
+      [companyId, needs.map((x) => x.material.id)],
+    );
+    const ids = lots.map((l) => l.id);
+    const [holds, balances] = await Promise.all([
+      ids.length
+        ? (m.query(
+            `SELECT r.lot_id AS "lotId",
+                    coalesce(sum(r.quantity - r.issued_quantity) FILTER (WHERE r.job_id <> $2), 0)::text AS others,
+                    coalesce(sum(r.quantity - r.issued_quantity) FILTER (WHERE r.job_id = $2), 0)::text AS mine,
+                    string_agg(DISTINCT 'J-' || lpad(j.number::text, 4, '0'), ', ') FILTER (WHERE r.job_id <> $2) AS refs
+               FROM reservations r JOIN jobs j ON j.id = r.job_id
+              WHERE r.status = 'held' AND r.lot_id = ANY($1) GROUP BY r.lot_id`,
+            [ids, job.id],
+          ) as Promise<{ lotId: string; others: string; mine: string; refs: string | null }[]>)
+        : Promise.resolve([]),
+      this.stock.lotBalances(m, companyId, ids),
+    ]);
+    const lotRef = (l: (typeof lots)[number]) => ({
+      id: l.id,
+      batchNumber: l.batchNumber,
+      expiresOn: l.expiresOn,
+    });
+    const unreserved = needs.map((need): PickListUnreserved => {
+      const mine = lots.filter((l) => l.materialId === need.material.id);
+      const free = new Map(
+        mine.map((l) => {
+          const h = holds.find((x) => x.lotId === l.id);
+          return [
+            l.id,
+            Decimal.max(ZERO, new Decimal(l.quantity).minus(h?.others ?? 0).minus(h?.mine ?? 0)),
+          ];
+        }),
+      );
+      const offered: FefoLot[] = mine.map((l) => ({
+        id: l.id,
+        quantity: free.get(l.id)!,
+        expiresOn: l.expiresOn ?? NO_EXPIRY,
+        usable: l.status === 'available' && !l.exposureFlagged,
+      }));
+      // Everything there is, taken FEFO: the candidates in the domain's order; then the suggestion.
+      const everything = allocateFefo(
+        offered,
+        offered.reduce((s, o) => s.plus(o.quantity), ZERO),
+        useBy,
+      );
+      const suggestion = allocateFefo(offered, need.outstanding, useBy);
+      const candidates = everything.allocations.map((a): PickListCandidate => {
+        const l = mine.find((x) => x.id === a.lotId)!;
+        const s = suggestion.allocations.find((x) => x.lotId === a.lotId);
+        return {
+          lot: lotRef(l),
+          onHand: new Decimal(l.quantity).toString(),
+          free: a.quantity.toString(),
+          suggested: s ? s.quantity.toString() : null,
+          places: (balances.find((b) => b.lotId === l.id)?.places ?? []).map((p) => ({
+            locationId: p.locationId,
+            locationName: locations.find((x) => x.id === p.locationId)?.name ?? '',
+            quantity: new Decimal(p.quantity).toString(),
+          })),
+        };
+      });
+      const passedOver: PickListPassedOver[] = [];
+      for (const skip of everything.skipped) {
+        const l = mine.find((x) => x.id === skip.lotId)!;
+        const h = holds.find((x) => x.lotId === l.id);
+        const flags: PickListPassedOver['flags'] = [];
+        if (l.status !== 'available') {
+          continue;
+        }
+        if (l.exposureFlagged) {
+          flags.push({
+            code: 'exposure-flagged',
+            message:
+              'Flagged “check before use” (stored outside its temperature range): it cannot be issued until the flag is cleared.',
+          });
+        }
+        if (
+          l.expiresOn &&
+          !lotUsableOn({ expiresOn: l.expiresOn, usable: true }, useBy) &&
+          lotUsableOn({ expiresOn: l.expiresOn, usable: true }, from)
+        ) {
+          flags.push({
+            code: 'expires-within-margin',
+            message: `Expires on ${l.expiresOn}, within the ${view.marginDays}-day margin after ${from === today ? 'today' : `the job date ${from}`}: not offered.`,
+          });
+        }
+        if (free.get(l.id)!.isZero() && h?.refs) {
+          flags.push({
+            code: 'held-for-other-jobs',
+            message: `All of it is reserved for ${h.refs}.`,
+          });
+        }
+        if (flags.length > 0) {
+          passedOver.push({ lot: lotRef(l), onHand: new Decimal(l.quantity).toString(), flags });
+        }
+      }
+      return {
+        material: need.material,
+        unit: need.unit,
+        quantity: need.outstanding,
+        candidates,
+        short: suggestion.shortfall.toString(),
+        passedOver,
+      };
+    });
+    return { useBy, unreserved };
   }
 
   /**
@@ -415,9 +576,18 @@ export class SiteStockService {
     const estimate = job.acceptedEstimateId
       ? (
           (await m.query(
-            `SELECT id, version, net::text, material_cost::text AS "materialCost", labour_cost::text AS "labourCost" FROM estimates WHERE id = $1`,
+            `SELECT id, version, net::text, material_cost::text AS "materialCost", labour_cost::text AS "labourCost",
+                    labour_hours::text AS "labourHours", labour_rate::text AS "labourRate" FROM estimates WHERE id = $1`,
             [job.acceptedEstimateId],
-          )) as { id: string; version: number; net: string; materialCost: string; labourCost: string }[]
+          )) as {
+            id: string;
+            version: number;
+            net: string;
+            materialCost: string;
+            labourCost: string;
+            labourHours: string;
+            labourRate: string;
+          }[]
         )[0]
       : undefined;
     const estimated: {
@@ -478,17 +648,41 @@ export class SiteStockService {
       materials.push(line(undefined, mv));
     }
     const price = estimate ? new Decimal(estimate.net) : null;
-    const labour = estimate ? new Decimal(estimate.labourCost) : null;
+    // Labour: the hours the crew recorded, at the accepted estimate's rate; the estimate's own
+    // labour while nothing is recorded (labourBasis says which).
+    const [{ hours: recordedText, entries }] = (await m.query(
+      `SELECT coalesce(sum(hours), 0)::text AS hours, count(*)::int AS entries
+         FROM job_labour_entries WHERE company_id = $1 AND job_id = $2 AND removed_at IS NULL`,
+      [user.companyId, job.id],
+    )) as [{ hours: string; entries: number }];
+    const recordedHours = new Decimal(recordedText);
+    const labourBasis: 'recorded' | 'estimate' = entries > 0 ? 'recorded' : 'estimate';
+    const recordedCost = estimate ? roundMoney(recordedHours.times(estimate.labourRate)) : null;
+    const labour = estimate
+      ? labourBasis === 'recorded'
+        ? recordedCost
+        : new Decimal(estimate.labourCost)
+      : null;
     const margin = price && labour ? price.minus(actual).minus(labour) : null;
     return {
       jobId: job.id,
       estimate: estimate ? { id: estimate.id, version: estimate.version } : null,
       materials,
+      labour: {
+        basis: labourBasis,
+        estimatedHours: estimate ? new Decimal(estimate.labourHours).toString() : null,
+        recordedHours: recordedHours.toString(),
+        entries,
+        rate: estimate ? new Decimal(estimate.labourRate).toFixed(2) : null,
+        estimatedCost: estimate ? new Decimal(estimate.labourCost).toFixed(2) : null,
+        recordedCost: recordedCost && entries > 0 ? recordedCost.toFixed(2) : null,
+      },
       totals: {
         price: price ? price.toFixed(2) : null,
         estimatedMaterials: estimate ? new Decimal(estimate.materialCost).toFixed(2) : null,
         actualMaterials: actual.toFixed(2),
         labour: labour ? labour.toFixed(2) : null,
+        labourBasis,
         margin: margin ? margin.toFixed(2) : null,
         marginPct:
           margin && price && price.gt(0) ? margin.div(price).times(100).toDecimalPlaces(1).toString() : null,
