@@ -324,6 +324,13 @@ const BODY_ROUTES: Record<string, BodyRoute> = {
     required: ['lines'],
     token: true,
   },
+  'POST /api/jobs/{id}/labour': {
+    method: 'post',
+    path: () => `/api/jobs/${'00000000-0000-4000-8000-0000000000b1'}/labour`,
+    valid: () => ({ workedOn: '2026-05-18', hours: '7.5', crewMember: 'Jonah Pell', note: 'n' }),
+    required: ['workedOn', 'hours', 'crewMember'],
+    token: true,
+  },
 };
 
 describe('bad input on every body', () => {

@@ -15,6 +15,9 @@ import { EstimatesController } from './estimates.controller';
 import { EstimatesService } from './estimates.service';
 import { JobsController } from './jobs.controller';
 import { JobsService } from './jobs.service';
+import { LabourEntry } from './labour/labour-entry.entity';
+import { LabourController } from './labour/labour.controller';
+import { LabourService } from './labour/labour.service';
 import { MaterialStates } from './material-states';
 import { QuoteService } from './quote.service';
 import { ReservationsController } from './reservations/reservations.controller';
@@ -36,6 +39,7 @@ import { StockModule } from '../stock/stock.module';
       EstimateLine,
       EstimateMaterial,
       EstimatePack,
+      LabourEntry,
     ]),
     CompaniesModule,
     CustomersModule,
@@ -43,7 +47,7 @@ import { StockModule } from '../stock/stock.module';
     CostingModule,
     StockModule,
   ],
-  controllers: [JobsController, EstimatesController, ReservationsController],
+  controllers: [JobsController, EstimatesController, ReservationsController, LabourController],
   providers: [
     JobsService,
     EstimatesService,
@@ -51,6 +55,7 @@ import { StockModule } from '../stock/stock.module';
     MaterialStates,
     ReservationsService,
     SiteStockService,
+    LabourService,
   ],
   exports: [JobsService],
 })

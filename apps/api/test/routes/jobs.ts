@@ -37,4 +37,7 @@ export const JOBS_ROUTES: Record<string, Role[] | 'public'> = {
   'POST /api/jobs/{id}/issues': ['owner', 'storeman'],
   'POST /api/jobs/{id}/returns': ['owner', 'storeman'],
   'GET /api/jobs/{id}/reconciliation': EDITORS,
+  'GET /api/jobs/{id}/labour': ALL,
+  'POST /api/jobs/{id}/labour': EDITORS,
+  'DELETE /api/jobs/{id}/labour/{entryId}': EDITORS,
 };
