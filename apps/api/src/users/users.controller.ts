@@ -1,8 +1,8 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { AuthUser, CurrentUser } from '../common/current-user';
-import { Roles } from '../common/roles';
-import { InviteUserDto, UpdateUserDto, UserResponse } from './dto/user.dto';
+import { ANY_ROLE, Roles } from '../common/roles';
+import { EstimatorResponse, InviteUserDto, UpdateUserDto, UserResponse } from './dto/user.dto';
 import { UsersService } from './users.service';
 
 @ApiTags('users')
@@ -15,6 +15,16 @@ export class UsersController {
   @Get()
   list(@CurrentUser() user: AuthUser): Promise<UserResponse[]> {
     return this.users.list(user.companyId);
+  }
+
+  /**
+   * The company's active people who can be a job's estimator (owners and estimators), for every
+   * signed-in role: id, name and role only (e-mail addresses stay with the owner's list).
+   */
+  @Get('estimators')
+  @Roles(...ANY_ROLE)
+  estimators(@CurrentUser() user: AuthUser): Promise<EstimatorResponse[]> {
+    return this.users.estimators(user.companyId);
   }
 
   @Post('invitations')

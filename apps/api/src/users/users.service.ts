@@ -6,7 +6,7 @@ import type { AuthUser } from '../common/current-user';
 import { ENV, Env } from '../config/env';
 import { CompaniesService } from '../companies/companies.service';
 import { MailService } from '../mail/mail.service';
-import { InviteUserDto, UpdateUserDto, UserResponse } from './dto/user.dto';
+import { EstimatorResponse, InviteUserDto, UpdateUserDto, UserResponse } from './dto/user.dto';
 import { User } from './entities/user.entity';
 
 const INVITATION_DAYS = 7;
@@ -35,6 +35,17 @@ export class UsersService {
   async list(companyId: string): Promise<UserResponse[]> {
     const users = await this.db.getRepository(User).find({ where: { companyId }, order: { name: 'ASC' } });
     return this.withPasswordFlag(this.db.manager, users);
+  }
+
+  /** Active owners and estimators (the people jobs.service accepts as a job's estimator), by name. */
+  async estimators(companyId: string): Promise<EstimatorResponse[]> {
+    const rows: EstimatorResponse[] = await this.db.query(
+      `SELECT id, name, role FROM users
+        WHERE company_id = $1 AND active AND role IN ('owner', 'estimator')
+        ORDER BY lower(name), id`,
+      [companyId],
+    );
+    return rows.map((r) => ({ id: r.id, name: r.name, role: r.role }));
   }
 
   async invite(actor: AuthUser, dto: InviteUserDto): Promise<UserResponse> {

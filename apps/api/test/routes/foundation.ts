@@ -9,6 +9,7 @@ export const FOUNDATION_ROUTES: Record<string, Role[] | 'public'> = {
   'GET /api/auth/invitations/{token}': 'public',
   'POST /api/auth/invitations/{token}/accept': 'public',
   'GET /api/users': ['owner'],
+  'GET /api/users/estimators': ['owner', 'estimator', 'storeman'],
   'POST /api/users/invitations': ['owner'],
   'PATCH /api/users/{id}': ['owner'],
   'GET /api/mail/messages': ['owner'],

@@ -59,3 +59,10 @@ export class UserResponse {
     };
   }
 }
+
+/** Someone who can be a job's estimator, as every role may see them: no e-mail address. */
+export class EstimatorResponse {
+  @ApiProperty() id: string;
+  @ApiProperty() name: string;
+  @ApiProperty({ enum: ['owner', 'estimator'] }) role: Role;
+}
