@@ -22,11 +22,23 @@ export class CustomersService {
       const like = `%${query.q.replace(/[\\%_]/g, (m) => `\\${m}`)}%`;
       qb.andWhere('(c.name ILIKE :like OR c.contact_name ILIKE :like OR c.email ILIKE :like)', { like });
     }
+    const sort = query.sort ?? 'name';
+    const direction = sort.startsWith('-') ? 'DESC' : 'ASC';
+    const key = sort.replace('-', '') as 'name' | 'createdAt' | 'jobCount';
+    if (key === 'jobCount') {
+      qb.addSelect('(SELECT count(*) FROM jobs j WHERE j.customer_id = c.id)', 'job_count').orderBy(
+        'job_count',
+        direction,
+      );
+    } else {
+      qb.orderBy(key === 'name' ? 'lower(c.name)' : 'c.created_at', direction);
+    }
     const [rows, total] = await qb
-      .orderBy('lower(c.name)', 'ASC')
+      // Ties by name (orderBy keys are unique, so the tie-break spells it differently from the sort).
+      .addOrderBy('c.name', 'ASC')
       .addOrderBy('c.id', 'ASC')
-      .skip((page - 1) * pageSize)
-      .take(pageSize)
+      .offset((page - 1) * pageSize)
+      .limit(pageSize)
       .getManyAndCount();
     const counts = await this.jobCounts(
       companyId,

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
-import { IsEmail, IsInt, IsOptional, IsString, Max, MaxLength, Min, MinLength } from 'class-validator';
+import { IsEmail, IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min, MinLength } from 'class-validator';
 import { trim, trimToNull } from '../../costing/validation';
 import type { Customer } from '../entities/customer.entity';
 
@@ -93,7 +93,15 @@ export class UpdateCustomerDto {
   notes?: string | null;
 }
 
+export const CUSTOMER_SORTS = ['name', '-name', 'createdAt', '-createdAt', 'jobCount', '-jobCount'] as const;
+export type CustomerSort = (typeof CUSTOMER_SORTS)[number];
+
 export class ListCustomersQuery {
+  @ApiPropertyOptional({ enum: CUSTOMER_SORTS, default: 'name' })
+  @IsOptional()
+  @IsIn(CUSTOMER_SORTS, { message: `must be one of ${CUSTOMER_SORTS.join(', ')}` })
+  sort?: CustomerSort;
+
   @ApiPropertyOptional({ description: 'part of the name, contact or e-mail' })
   @IsOptional()
   @Transform(trim)
