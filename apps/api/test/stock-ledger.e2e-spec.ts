@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import { randomUUID } from 'node:crypto';
 import { DataSource } from 'typeorm';
 import { HttpException } from '@nestjs/common';
+import { IdempotencyService } from '../src/stock/idempotency.service';
 import { StockService } from '../src/stock/stock.service';
 import { auth, createTestApp, TestApp } from './app';
 import { cachedBalances, insertJob, key, ledgerSums, receive, sql, stockWorld, StockWorld } from './stock-fixtures';
@@ -447,6 +448,20 @@ describe('stock ledger', () => {
       await move(tooMuch, k2).expect(409);
       await move({ ...tooMuch, quantity: '1' }, k2).expect(201);
       expect((await t.http().post('/api/stock-movements').set(auth(w.storeman)).set('Idempotency-Key', 'bad key with spaces').send(tooMuch)).status).toBe(400);
+    });
+
+    it('keys older than a week are purged; newer ones still answer their retry', async () => {
+      const r = await receive(t, w.storeman, [{ materialId: w.material.mat, locationId: w.location.bayA, packs: 1, packSize: '10' }]);
+      const lotId = r.lines[0]!.lotId;
+      const [oldKey, newKey] = [key(), key()];
+      const body = (q: string) => ({ kind: 'transfer', lotId, fromLocationId: w.location.bayA, toLocationId: w.location.bayB, quantity: q });
+      await move(body('1'), oldKey).expect(201);
+      await move(body('2'), newKey).expect(201);
+      await sql(t, `UPDATE idempotency_keys SET created_at = now() - interval '8 days' WHERE key = $1`, [oldKey]);
+      expect(await t.app.get(IdempotencyService).purge()).toBeGreaterThanOrEqual(1);
+      expect(await sql(t, `SELECT key FROM idempotency_keys WHERE key = ANY($1)`, [[oldKey, newKey]])).toEqual([{ key: newKey }]);
+      await move(body('2'), newKey).expect(201); // still a retry: no second movement
+      expect((await ledgerSums(t, lotId)).byLocation[w.location.bayB]).toBe('3.000');
     });
   });
 });

@@ -1,7 +1,23 @@
-import { Injectable, UnprocessableEntityException } from '@nestjs/common';
+import {
+  Inject,
+  Injectable,
+  Logger,
+  OnApplicationBootstrap,
+  OnApplicationShutdown,
+  Optional,
+  UnprocessableEntityException,
+} from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { createHash } from 'node:crypto';
 import { DataSource, EntityManager } from 'typeorm';
+import { ENV, Env } from '../config/env';
+
+/**
+ * How long a key is kept. A client retries within seconds or minutes; a week also covers a phone
+ * that lost its signal in the store on a Friday and retries on Monday. Older keys are deleted.
+ */
+export const IDEMPOTENCY_KEEP_DAYS = 7;
+const PURGE_MS = 60 * 60 * 1000;
 
 export interface IdempotentRequest {
   companyId: string;
@@ -36,11 +52,43 @@ export const requestHash = (route: string, request: unknown) => createHash('sha2
  * transaction. A retry with the same key answers the stored response and changes nothing; while
  * the first is still running, the retry waits on the key's row, then answers the same. The same
  * key with a different request (or route) answers 422. A request that fails rolls its key back,
- * so it can be retried.
+ * so it can be retried. Keys are kept for IDEMPOTENCY_KEEP_DAYS.
  */
 @Injectable()
-export class IdempotencyService {
-  constructor(@InjectDataSource() private readonly db: DataSource) {}
+export class IdempotencyService implements OnApplicationBootstrap, OnApplicationShutdown {
+  private readonly logger = new Logger(IdempotencyService.name);
+  private purger?: NodeJS.Timeout;
+
+  constructor(
+    @InjectDataSource() private readonly db: DataSource,
+    @Optional() @Inject(ENV) private readonly env?: Env,
+  ) {}
+
+  /** Deletes keys older than `keepDays`; the number deleted. Runs hourly where the workers run. */
+  async purge(keepDays = IDEMPOTENCY_KEEP_DAYS): Promise<number> {
+    const [row] = (await this.db.query(
+      `WITH gone AS (DELETE FROM idempotency_keys WHERE created_at < now() - make_interval(days => $1) RETURNING 1)
+       SELECT count(*)::int AS n FROM gone`,
+      [keepDays],
+    )) as { n: number }[];
+    return row?.n ?? 0;
+  }
+
+  onApplicationBootstrap(): void {
+    if (!this.env || this.env.QUEUE_ROLE === 'api' || this.env.NODE_ENV === 'test') {
+      return;
+    }
+    this.purger = setInterval(() => {
+      this.purge().catch((err: unknown) => this.logger.warn(`idempotency key purge failed: ${String(err)}`));
+    }, PURGE_MS);
+    this.purger.unref();
+  }
+
+  onApplicationShutdown(): void {
+    if (this.purger) {
+      clearInterval(this.purger);
+    }
+  }
 
   /** Runs `work` in a new transaction, once per key. */
   run<T>(req: IdempotentRequest, work: (m: EntityManager) => Promise<T>): Promise<T> {
