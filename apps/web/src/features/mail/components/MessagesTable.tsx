@@ -1,10 +1,11 @@
-import { Anchor, Badge, CloseButton, Group, Stack, Text, TextInput } from '@mantine/core';
-import { IconPaperclip, IconSearch } from '@tabler/icons-react';
-import { DataTable, type DataTableSortStatus } from 'mantine-datatable';
-import { useMemo, useState } from 'react';
+import { Anchor, Badge, Group, Stack, Text } from '@mantine/core';
+import { IconPaperclip } from '@tabler/icons-react';
+import { DataTable } from 'mantine-datatable';
 import { Link } from 'react-router-dom';
+import { SearchInput } from '../../../components/SearchInput';
 import { hrefs } from '../../../config/paths';
-import { compareValues, formatDateTime } from '../../../lib/format';
+import { formatDateTime } from '../../../lib/format';
+import { useClientTable } from '../../../lib/use-client-table';
 import type { MailMessageSummary } from '../api/get-messages';
 
 const PAGE_SIZES = [15, 30, 60];
@@ -24,35 +25,16 @@ function sortValue(message: MailMessageSummary, column: string): string | number
   }
 }
 
-function matches(message: MailMessageSummary, query: string): boolean {
-  const haystack = [message.from, message.to, message.subject].join(' ').toLowerCase();
-  return query
-    .toLowerCase()
-    .split(/\s+/)
-    .filter(Boolean)
-    .every((word) => haystack.includes(word));
-}
+const searchText = (message: MailMessageSummary) => [message.from, message.to, message.subject].join(' ');
 
 export function MessagesTable({ messages }: { messages: MailMessageSummary[] }) {
-  const [query, setQuery] = useState('');
-  const [sortStatus, setSortStatus] = useState<DataTableSortStatus<MailMessageSummary>>({
-    columnAccessor: 'receivedAt',
-    direction: 'desc',
+  const table = useClientTable<MailMessageSummary>(messages, {
+    searchText,
+    sortValue,
+    initialSort: { columnAccessor: 'receivedAt', direction: 'desc' },
+    pageSizes: PAGE_SIZES,
   });
-  const [page, setPage] = useState(1);
-  const [pageSize, setPageSize] = useState(PAGE_SIZES[0] ?? 15);
-
-  const sorted = useMemo(() => {
-    const column = String(sortStatus.columnAccessor);
-    const direction = sortStatus.direction === 'asc' ? 1 : -1;
-    return messages
-      .filter((message) => matches(message, query))
-      .sort((a, b) => direction * compareValues(sortValue(a, column), sortValue(b, column)));
-  }, [messages, query, sortStatus]);
-
-  const lastPage = Math.max(1, Math.ceil(sorted.length / pageSize));
-  const currentPage = Math.min(page, lastPage);
-  const records = sorted.slice((currentPage - 1) * pageSize, currentPage * pageSize);
+  const { query, records } = table;
 
   const emptyText =
     messages.length === 0
@@ -61,28 +43,12 @@ export function MessagesTable({ messages }: { messages: MailMessageSummary[] }) 
 
   return (
     <Stack gap="sm">
-      <TextInput
-        aria-label="Filter messages"
+      <SearchInput
+        label="Filter messages"
         placeholder="Filter by sender, recipient or subject"
-        leftSection={<IconSearch size={16} />}
         value={query}
-        onChange={(event) => {
-          setQuery(event.currentTarget.value);
-          setPage(1);
-        }}
-        rightSection={
-          query ? (
-            <CloseButton
-              aria-label="Clear the filter"
-              onClick={() => {
-                setQuery('');
-                setPage(1);
-              }}
-            />
-          ) : null
-        }
-        maw={420}
-        size="sm"
+        onChange={table.setQuery}
+        width={420}
       />
       <DataTable<MailMessageSummary>
         withTableBorder
@@ -93,22 +59,8 @@ export function MessagesTable({ messages }: { messages: MailMessageSummary[] }) 
         records={records}
         idAccessor="id"
         noRecordsText={emptyText}
-        sortStatus={sortStatus}
-        onSortStatusChange={(status) => {
-          setSortStatus(status);
-          setPage(1);
-        }}
-        totalRecords={sorted.length}
-        recordsPerPage={pageSize}
-        page={currentPage}
-        onPageChange={setPage}
-        recordsPerPageOptions={PAGE_SIZES}
-        onRecordsPerPageChange={(size) => {
-          setPageSize(size);
-          setPage(1);
-        }}
+        {...table.tableProps}
         recordsPerPageLabel="Messages per page"
-        paginationText={({ from, to, totalRecords }) => `${from}–${to} of ${totalRecords}`}
         columns={[
           {
             accessor: 'receivedAt',

@@ -1,9 +1,10 @@
-import { Button, CloseButton, Select, Stack, Text, TextInput } from '@mantine/core';
-import { IconSearch, IconUserOff, IconUserCheck } from '@tabler/icons-react';
-import { DataTable, type DataTableSortStatus } from 'mantine-datatable';
-import { useMemo, useState } from 'react';
-import { compareValues, formatDate } from '../../../lib/format';
+import { Button, Select, Stack, Text } from '@mantine/core';
+import { IconUserOff, IconUserCheck } from '@tabler/icons-react';
+import { DataTable } from 'mantine-datatable';
+import { SearchInput } from '../../../components/SearchInput';
+import { formatDate } from '../../../lib/format';
 import { isRole, ROLES, roleLabels, type Role } from '../../../lib/roles';
+import { useClientTable } from '../../../lib/use-client-table';
 import type { CompanyUser } from '../api/get-users';
 import { statusLabels, UserStatusBadge } from './UserStatusBadge';
 
@@ -17,17 +18,6 @@ interface UsersTableProps {
   busyUserId?: string;
   onChangeRole: (user: CompanyUser, role: Role) => void;
   onSetActive: (user: CompanyUser, active: boolean) => void;
-}
-
-function matches(user: CompanyUser, query: string): boolean {
-  const haystack = [user.name, user.email, roleLabels[user.role], statusLabels[user.status]]
-    .join(' ')
-    .toLowerCase();
-  return query
-    .toLowerCase()
-    .split(/\s+/)
-    .filter(Boolean)
-    .every((word) => haystack.includes(word));
 }
 
 function sortValue(user: CompanyUser, column: string): string | number {
@@ -45,26 +35,17 @@ function sortValue(user: CompanyUser, column: string): string | number {
   }
 }
 
+const searchText = (user: CompanyUser) =>
+  [user.name, user.email, roleLabels[user.role], statusLabels[user.status]].join(' ');
+
 export function UsersTable({ users, currentUserId, busyUserId, onChangeRole, onSetActive }: UsersTableProps) {
-  const [query, setQuery] = useState('');
-  const [sortStatus, setSortStatus] = useState<DataTableSortStatus<CompanyUser>>({
-    columnAccessor: 'name',
-    direction: 'asc',
+  const table = useClientTable<CompanyUser>(users, {
+    searchText,
+    sortValue,
+    initialSort: { columnAccessor: 'name', direction: 'asc' },
+    pageSizes: PAGE_SIZES,
   });
-  const [page, setPage] = useState(1);
-  const [pageSize, setPageSize] = useState(PAGE_SIZES[0] ?? 10);
-
-  const sorted = useMemo(() => {
-    const column = String(sortStatus.columnAccessor);
-    const direction = sortStatus.direction === 'asc' ? 1 : -1;
-    return users
-      .filter((user) => matches(user, query))
-      .sort((a, b) => direction * compareValues(sortValue(a, column), sortValue(b, column)));
-  }, [users, query, sortStatus]);
-
-  const lastPage = Math.max(1, Math.ceil(sorted.length / pageSize));
-  const currentPage = Math.min(page, lastPage);
-  const records = sorted.slice((currentPage - 1) * pageSize, currentPage * pageSize);
+  const { query, records } = table;
 
   const emptyText =
     users.length === 0
@@ -73,28 +54,12 @@ export function UsersTable({ users, currentUserId, busyUserId, onChangeRole, onS
 
   return (
     <Stack gap="sm">
-      <TextInput
-        aria-label="Filter users"
+      <SearchInput
+        label="Filter users"
         placeholder="Filter by name, e-mail, role or status"
-        leftSection={<IconSearch size={16} />}
         value={query}
-        onChange={(event) => {
-          setQuery(event.currentTarget.value);
-          setPage(1);
-        }}
-        rightSection={
-          query ? (
-            <CloseButton
-              aria-label="Clear the filter"
-              onClick={() => {
-                setQuery('');
-                setPage(1);
-              }}
-            />
-          ) : null
-        }
-        maw={420}
-        size="sm"
+        onChange={table.setQuery}
+        width={420}
       />
       <DataTable<CompanyUser>
         withTableBorder
@@ -105,22 +70,8 @@ export function UsersTable({ users, currentUserId, busyUserId, onChangeRole, onS
         records={records}
         idAccessor="id"
         noRecordsText={emptyText}
-        sortStatus={sortStatus}
-        onSortStatusChange={(status) => {
-          setSortStatus(status);
-          setPage(1);
-        }}
-        totalRecords={sorted.length}
-        recordsPerPage={pageSize}
-        page={currentPage}
-        onPageChange={setPage}
-        recordsPerPageOptions={PAGE_SIZES}
-        onRecordsPerPageChange={(size) => {
-          setPageSize(size);
-          setPage(1);
-        }}
+        {...table.tableProps}
         recordsPerPageLabel="Users per page"
-        paginationText={({ from, to, totalRecords }) => `${from}–${to} of ${totalRecords}`}
         columns={[
           {
             accessor: 'name',
