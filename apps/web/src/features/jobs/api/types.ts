@@ -347,6 +347,31 @@ export interface PickListLine {
   flags: ReservationFlag[];
 }
 
+export type PickListLotFlagCode = 'expires-within-margin' | 'exposure-flagged' | 'held-for-other-jobs';
+
+/** A lot that could go to the job now for a need that was not reserved (API order: FEFO). */
+export interface PickListCandidate {
+  lot: LotRef;
+  onHand: string;
+  /** the most it may give this job: on hand less other jobs' holds and this job's reserved lines */
+  free: string;
+  /** the FEFO suggestion's quantity of this lot, or null when not suggested */
+  suggested: string | null;
+  places: { locationId: string; locationName: string; quantity: string }[];
+}
+
+export interface PickListUnreserved {
+  material: { id: string; code: string; name: string };
+  unit: string;
+  /** outstanding: needed − held − issued */
+  quantity: string;
+  candidates: PickListCandidate[];
+  /** what usable stock cannot cover */
+  short: string;
+  /** in stock but not offered, and why */
+  passedOver: { lot: LotRef; onHand: string; flags: { code: PickListLotFlagCode; message: string }[] }[];
+}
+
 export interface PickList {
   jobId: string;
   reference: string;
@@ -355,7 +380,7 @@ export interface PickList {
   jobDate: string | null;
   crew: string | null;
   lines: PickListLine[];
-  unreserved: { material: { id: string; code: string; name: string }; unit: string; quantity: string }[];
+  unreserved: PickListUnreserved[];
   issued: { material: Named; unit: string; issued: string; returned: string }[];
   cautions: Caution[];
 }

@@ -1,17 +1,22 @@
 import { Badge, Group, Tooltip } from '@mantine/core';
 import { IconAlertTriangle } from '@tabler/icons-react';
-import type { ReservationFlag, ReservationFlagCode } from '../../api/types';
+import type { PickListLotFlagCode, ReservationFlagCode } from '../../api/types';
 
-const FLAG_LABELS: Record<ReservationFlagCode, string> = {
+const FLAG_LABELS: Record<ReservationFlagCode | PickListLotFlagCode, string> = {
   'expires-before-job': 'Expires before the job',
   'expires-within-margin': 'Expires within the margin',
   quarantined: 'Quarantined',
   'exposure-flagged': 'Check before use',
   'not-in-stock': 'No longer in stock',
+  'held-for-other-jobs': 'Reserved for another job',
 };
 
 /** What is wrong with a lot for the job date, each with the API's sentence on hover. */
-export function FlagBadges({ flags }: { flags: ReservationFlag[] }) {
+export function FlagBadges({
+  flags,
+}: {
+  flags: { code: ReservationFlagCode | PickListLotFlagCode; message: string }[];
+}) {
   if (flags.length === 0) {
     return null;
   }

@@ -1,15 +1,4 @@
-import {
-  Alert,
-  Button,
-  Checkbox,
-  Group,
-  Paper,
-  Select,
-  SimpleGrid,
-  Stack,
-  Text,
-  TextInput,
-} from '@mantine/core';
+import { Button, Checkbox, Group, Paper, Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
 import { IconPrinter, IconTruckDelivery } from '@tabler/icons-react';
 import { useEffect, useState } from 'react';
@@ -21,6 +10,7 @@ import type { JobDetail, PickList, PickListLine } from '../../api/types';
 import { formatQuantity, unitLabel } from '../../utils/format';
 import { CautionsList } from '../estimate/CautionsList';
 import { FlagBadges, lotLabel } from './FlagBadges';
+import { UnreservedNeeds } from './UnreservedNeeds';
 
 const QUANTITY = /^\d{1,9}(\.\d{1,3})?$/;
 
@@ -226,15 +216,8 @@ export function PickListPanel({ job, pickList, canIssue, issueNote = null }: Pic
           </Stack>
         )}
 
-        {pickList.unreserved.length > 0 &&
-        !['complete', 'invoiced', 'lost', 'cancelled'].includes(job.status) ? (
-          <Alert color="orange" variant="light" title="Needed but not reserved">
-            {pickList.unreserved.map((u) => (
-              <Text size="sm" key={u.material.id}>
-                {u.material.name}: {formatQuantity(u.quantity, u.unit, 3)}
-              </Text>
-            ))}
-          </Alert>
+        {!['complete', 'invoiced', 'lost', 'cancelled'].includes(job.status) ? (
+          <UnreservedNeeds job={job} needs={pickList.unreserved} canIssue={canIssue} />
         ) : null}
 
         {canIssue && pickList.lines.length > 0 ? (
