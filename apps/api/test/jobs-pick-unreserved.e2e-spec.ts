@@ -90,7 +90,13 @@ describe('the pick list for unreserved needs', () => {
       .http()
       .post('/api/stock-movements')
       .set(auth(storeman))
-      .send({ kind: 'transfer', lotId: lots.twoPlaces, fromLocationId: store, toLocationId: van, quantity: '1' })
+      .send({
+        kind: 'transfer',
+        lotId: lots.twoPlaces,
+        fromLocationId: store,
+        toLocationId: van,
+        quantity: '1',
+      })
       .expect(201);
     // Our job is won and scheduled for the same day but never reserved: every need is unreserved.
     job = await readyJob(t, estimator, {
@@ -136,9 +142,7 @@ describe('the pick list for unreserved needs', () => {
     // Left out: U-Q (quarantined), U-OLD (expires the day before the job). Passed over with why:
     // U-F (flagged), U-MARGIN (+3 d: in date on the job day, not on job day + 7), U-HELD.
     // FEFO for 15 kg: 4 of U-TWO, 7 of U-PART, 4 of U-LATE; nothing short.
-    expect(
-      need.candidates.map((c: any) => [c.lot.batchNumber, c.onHand, c.free, c.suggested]),
-    ).toEqual([
+    expect(need.candidates.map((c: any) => [c.lot.batchNumber, c.onHand, c.free, c.suggested])).toEqual([
       ['U-TWO', '4', '4', '4'],
       ['U-PART', '12', '7', '7'],
       ['U-LATE', '20', '20', '4'],
@@ -160,9 +164,7 @@ describe('the pick list for unreserved needs', () => {
       inDays(jobDay + margin),
     );
     expect(
-      need.candidates
-        .filter((c: any) => c.suggested !== null)
-        .map((c: any) => [c.lot.id, c.suggested]),
+      need.candidates.filter((c: any) => c.suggested !== null).map((c: any) => [c.lot.id, c.suggested]),
     ).toEqual(fefo.allocations.map((a) => [a.lotId, a.quantity.toString()]));
     // The lot in two places says where each part is.
     expect(need.candidates[0].places).toEqual(
@@ -220,7 +222,11 @@ describe('the pick list for unreserved needs', () => {
     expect(body.issued).toEqual([
       { material: { id: cat.resin, name: 'Deck base resin' }, unit: 'kg', issued: '7', returned: '0' },
     ]);
-    const reservations = await t.http().get(`/api/jobs/${job.id}/reservations`).set(auth(storeman)).expect(200);
+    const reservations = await t
+      .http()
+      .get(`/api/jobs/${job.id}/reservations`)
+      .set(auth(storeman))
+      .expect(200);
     expect(reservations.body.materials.find((m: any) => m.material.id === cat.resin)).toMatchObject({
       needed: '15',
       held: '0',
