@@ -269,6 +269,97 @@ describe('catalogue', () => {
     });
   });
 
+  describe('trim pieces', () => {
+    let company: Session;
+    const trimBody = (code: string, over: Record<string, unknown> = {}) => ({
+      code,
+      name: `Trim ${code}`,
+      kind: 'trim',
+      stockUnit: 'each',
+      packSizes: [{ size: '1', label: 'piece' }],
+      trimKind: 'drip',
+      trimLengthM: '3',
+      ...over,
+    });
+    beforeAll(async () => {
+      company = await registerCompany(t, 'Trim Piece Roofing');
+    });
+
+    it('a trim is a length unless it says it is a corner piece; only trims have one', async () => {
+      const length = await t.http().post('/api/materials').set(auth(company)).send(trimBody('TP-LEN')).expect(201);
+      expect(length.body.trimPiece).toBe('length');
+      const corner = await t
+        .http()
+        .post('/api/materials')
+        .set(auth(company))
+        .send(trimBody('TP-EXT', { name: 'Outside piece', trimPiece: 'external-corner', trimLengthM: '0.3' }))
+        .expect(201);
+      expect(corner.body.trimPiece).toBe('external-corner');
+      const inner = await t.http().patch(`/api/materials/${corner.body.id}`).set(auth(company)).send({ trimPiece: 'internal-corner' }).expect(200);
+      expect(inner.body.trimPiece).toBe('internal-corner');
+      const cleared = await t.http().patch(`/api/materials/${corner.body.id}`).set(auth(company)).send({ trimPiece: null }).expect(200);
+      expect(cleared.body.trimPiece).toBe('length');
+      const bad = await t.http().post('/api/materials').set(auth(company)).send(trimBody('TP-BAD', { trimPiece: 'corner' })).expect(400);
+      expect(bad.body.message).toContain('trimPiece:');
+      const onResin = await t.http().post('/api/materials').set(auth(company)).send(resin('TP-RES', { trimPiece: 'length' })).expect(400);
+      expect(onResin.body.message).toContain('trimPiece: only a trim');
+      expect((await t.http().post('/api/materials').set(auth(company)).send(resin('TP-RES2')).expect(201)).body.trimPiece).toBeNull();
+    });
+
+    it('the CSV carries trim_piece: bad values are row errors, files without the column still import', async () => {
+      const head = ['code', 'name', 'kind', 'stock_unit', 'pack_sizes', 'trim_kind', 'trim_length_m', 'trim_piece', 'hazard_class'];
+      const preview = await t
+        .http()
+        .post('/api/materials/import?mode=preview')
+        .set(auth(company))
+        .send({
+          csv: csvOf([
+            head,
+            ['TP-INT', 'Inside piece', 'trim', 'each', '1:piece', 'drip', '0.3', 'internal-corner', 'none'],
+            ['TP-X', 'Odd piece', 'trim', 'each', '1:piece', 'drip', '0.3', 'elbow', 'none'],
+            ['TP-ACE', 'Acetone', 'acetone', 'L', '5:5 L can', '', '', 'length', 'none'],
+            ['TP-NEW', 'New length', 'trim', 'each', '1:piece', 'kerb', '3', '', 'none'],
+          ]),
+        })
+        .expect(200);
+      const byRow = Object.fromEntries(preview.body.rows.map((r: { row: number }) => [r.row, r]));
+      expect(byRow[2].errors).toEqual([]);
+      expect(byRow[3].errors).toEqual([{ field: 'trim_piece', message: expect.stringContaining('must be one of length, external-corner, internal-corner') }]);
+      expect(byRow[4].errors).toEqual([{ field: 'trim_piece', message: expect.stringContaining('only a trim') }]);
+      expect(byRow[5].errors).toEqual([]);
+      // An older file without the column: the corner keeps its piece, a new trim is a length.
+      await t
+        .http()
+        .post('/api/materials/import?mode=commit')
+        .set(auth(company))
+        .send({
+          csv: csvOf([
+            ['code', 'name', 'kind', 'stock_unit', 'pack_sizes', 'trim_kind', 'trim_length_m'],
+            ['TP-EXT', 'Outside piece renamed', 'trim', 'each', '1:piece', 'drip', '0.3'],
+            ['TP-OLD', 'Length from an old file', 'trim', 'each', '1:piece', 'wall', '3'],
+          ]),
+        })
+        .expect(200);
+      await t.http().patch(`/api/materials/${(await t.http().get('/api/materials?q=TP-EXT').set(auth(company))).body.items[0].id}`).set(auth(company)).send({ trimPiece: 'external-corner' }).expect(200);
+      const again = await t
+        .http()
+        .post('/api/materials/import?mode=commit')
+        .set(auth(company))
+        .send({ csv: csvOf([['code', 'name', 'kind', 'stock_unit', 'pack_sizes', 'trim_kind', 'trim_length_m'], ['TP-EXT', 'Outside piece renamed again', 'trim', 'each', '1:piece', 'drip', '0.3']]) })
+        .expect(200);
+      expect(again.body.updated).toBe(1);
+      const list = (await t.http().get('/api/materials?kind=trim&pageSize=100').set(auth(company)).expect(200)).body.items;
+      const piece = (code: string) => list.find((m: { code: string }) => m.code === code)?.trimPiece;
+      expect([piece('TP-EXT'), piece('TP-OLD')]).toEqual(['external-corner', 'length']);
+      const exported = await t.http().get('/api/materials/export.csv?kind=trim').set(auth(company)).expect(200);
+      const [header, ...lines] = exported.text.replace(/^\uFEFF/, '').trim().split(/\r?\n/);
+      const col = header!.split(',').indexOf('trim_piece');
+      expect(col).toBeGreaterThan(-1);
+      const ext = lines.find((l) => l.startsWith('TP-EXT,'))!;
+      expect(ext.split(',')[col]).toBe('external-corner');
+    });
+  });
+
   describe('CSV import and export', () => {
     const HEADER = ['code', 'name', 'kind', 'stock_unit', 'pack_sizes', 'shelf_life_days', 'storage_min_c', 'storage_max_c', 'hazard_class', 'un_number', 'packing_group', 'mat_gsm', 'roll_width_m'];
     let company: Session;
@@ -459,6 +550,9 @@ describe('catalogue', () => {
         ['Brackenfield Resin Supply', '86.40'],
       ]);
       expect(drum25.prices[1].previous).toMatchObject({ packPrice: '82.00', validFrom: '2025-01-06' });
+      const trims = (await t.http().get('/api/materials?kind=trim&pageSize=100').set(auth(demo)).expect(200)).body.items;
+      const piece = (code: string) => trims.find((m: { code: string }) => m.code === code)?.trimPiece;
+      expect([piece('TRM-DRIP'), piece('CRN-EXT'), piece('CRN-INT')]).toEqual(['length', 'external-corner', 'internal-corner']);
       const catalyst = (await t.http().get('/api/materials?q=CAT-MEKP').set(auth(demo)).expect(200)).body.items[0];
       // MEKP hardener: class 5.2, commonly UN3105 — [memory], verify against ADR 2.2.52.4.
       expect(catalyst).toMatchObject({ hazardClass: '5.2', unNumber: '3105', packingGroup: null, shelfLifeDays: 365 });

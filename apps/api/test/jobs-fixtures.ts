@@ -36,6 +36,8 @@ type Mat = {
   roll?: string;
   trim?: string;
   trimLength?: string;
+  /** trims: length (the default), external-corner or internal-corner */
+  piece?: string;
   colour?: string;
   litresPerKg?: string;
 };
@@ -124,6 +126,7 @@ export async function seedTestCatalogue(c: Client, companyId: string): Promise<C
       name: 'External corner piece',
       kind: 'trim',
       unit: 'each',
+      piece: 'external-corner',
       packs: [{ size: '1', label: 'piece' }],
     },
     internalCorner: {
@@ -131,6 +134,7 @@ export async function seedTestCatalogue(c: Client, companyId: string): Promise<C
       name: 'Internal corner piece',
       kind: 'trim',
       unit: 'each',
+      piece: 'internal-corner',
       packs: [{ size: '1', label: 'piece' }],
     },
     outlet: {
@@ -180,8 +184,8 @@ export async function seedTestCatalogue(c: Client, companyId: string): Promise<C
   const ids = {} as CatalogueIds;
   for (const [key, m] of Object.entries(mats) as [keyof typeof mats, Mat][]) {
     const { rows } = await c.query<{ id: string }>(
-      `INSERT INTO materials (company_id, code, name, kind, stock_unit, pack_sizes, mat_gsm, roll_width_m, trim_kind, trim_length_m, topcoat_colour, litres_per_kg)
-       VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12) RETURNING id`,
+      `INSERT INTO materials (company_id, code, name, kind, stock_unit, pack_sizes, mat_gsm, roll_width_m, trim_kind, trim_length_m, topcoat_colour, litres_per_kg, trim_piece)
+       VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13) RETURNING id`,
       [
         companyId,
         m.code,
@@ -195,6 +199,7 @@ export async function seedTestCatalogue(c: Client, companyId: string): Promise<C
         m.trimLength ?? null,
         m.colour ?? null,
         m.litresPerKg ?? null,
+        m.kind === 'trim' ? (m.piece ?? 'length') : null,
       ],
     );
     ids[key] = rows[0]!.id;

@@ -299,7 +299,7 @@ const BODY_ROUTES: Record<string, BodyRoute> = {
   'POST /api/jobs/{id}/estimates': {
     method: 'post',
     path: () => `/api/jobs/${'00000000-0000-4000-8000-0000000000b1'}/estimates`,
-    valid: () => ({ buildUpId: '00000000-0000-4000-8000-0000000000b1', airC: '12', materials: [{ role: 'mat', materialId: '00000000-0000-4000-8000-0000000000b1' }], note: 'n' }),
+    valid: () => ({ buildUpId: '00000000-0000-4000-8000-0000000000b1', airC: '12', materials: [{ role: 'mat', materialId: '00000000-0000-4000-8000-0000000000b1' }], costBasis: 'stock', note: 'n' }),
     required: [],
     token: true,
   },

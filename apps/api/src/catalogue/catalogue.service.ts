@@ -61,6 +61,7 @@ const IMPORT_COLUMNS: readonly [column: string, field: keyof MaterialFields, typ
   ['roll_width_m', 'rollWidthM', 'numeric'],
   ['trim_kind', 'trimKind', 'text'],
   ['trim_length_m', 'trimLengthM', 'numeric'],
+  ['trim_piece', 'trimPiece', 'text'],
   ['topcoat_colour', 'topcoatColour', 'text'],
   ['litres_per_kg', 'litresPerKg', 'numeric'],
   ['active', 'active', 'boolean'],

@@ -52,6 +52,7 @@ export const MATERIAL_CSV_SPEC = {
   roll_width_m: { field: 'rollWidthM', type: 'decimal', nullable: true, note: 'm; needed for a mat' },
   trim_kind: { field: 'trimKind', type: 'text', nullable: true, note: 'drip, kerb, wall or angle; needed for a trim' },
   trim_length_m: { field: 'trimLengthM', type: 'decimal', nullable: true, note: 'm; needed for a trim' },
+  trim_piece: { field: 'trimPiece', type: 'text', nullable: true, note: 'trims only: length, external-corner or internal-corner (empty: length)' },
   topcoat_colour: { field: 'topcoatColour', type: 'text', nullable: true, note: 'topcoat only' },
   litres_per_kg: { field: 'litresPerKg', type: 'decimal', nullable: true, note: 'for liquids stocked by weight' },
   active: { field: 'active', type: 'bool', nullable: false, note: 'yes or no (default yes); no archives the material' },

@@ -1,7 +1,7 @@
 import { Decimal } from '@potlife/domain';
 import type { EdgeKind, HazardClass, MaterialKind } from '@potlife/domain';
 import type { MaterialResponse, PackingGroup } from './dto/material.dto';
-import type { Material, PackSize, StockUnit } from './entities/material.entity';
+import type { Material, PackSize, StockUnit, TrimPiece } from './entities/material.entity';
 import { plainDecimal } from './dto/validators';
 
 /** Everything a user sets on a material, as stored (decimal strings, nulls for "not given"). */
@@ -26,6 +26,7 @@ export interface MaterialFields {
   rollWidthM: string | null;
   trimKind: EdgeKind | null;
   trimLengthM: string | null;
+  trimPiece: TrimPiece | null;
   topcoatColour: string | null;
   litresPerKg: string | null;
   active: boolean;
@@ -51,6 +52,7 @@ export const MATERIAL_DEFAULTS: Omit<MaterialFields, 'code' | 'name' | 'kind' | 
   rollWidthM: null,
   trimKind: null,
   trimLengthM: null,
+  trimPiece: null,
   topcoatColour: null,
   litresPerKg: null,
   active: true,
@@ -80,6 +82,8 @@ export function normaliseFields(f: MaterialFields): MaterialFields {
     reorderQuantity: plainDecimal(f.reorderQuantity),
     rollWidthM: plainDecimal(f.rollWidthM),
     trimLengthM: plainDecimal(f.trimLengthM),
+    // a trim is a length unless it says it is a corner piece
+    trimPiece: f.kind === 'trim' ? (f.trimPiece ?? 'length') : f.trimPiece,
     litresPerKg: plainDecimal(f.litresPerKg),
   };
 }
@@ -116,7 +120,8 @@ const MAT_FIELD_KINDS: readonly MaterialKind[] = ['mat', 'bandage'];
 /**
  * Rules between fields that a per-field check cannot see. Each problem names its field.
  * - a mat needs its weight (g/m²) and roll width; only mat and bandage carry them;
- * - a trim needs its kind (drip, kerb, wall, angle) and length; only trims carry them;
+ * - a trim needs its kind (drip, kerb, wall, angle) and length; only trims carry them, and
+ *   only a trim is a piece (length, external or internal corner; a trim is a length by default);
  * - only a topcoat has a colour;
  * - a hazardous material has a UN number, one with no hazard class has none; organic peroxides
  *   (5.2) and gases (2) are not given packing groups ([memory] ADR 2.1.1.3, verify);
@@ -153,6 +158,9 @@ export function materialRuleErrors(f: MaterialFields): FieldError[] {
     }
     if (f.trimLengthM !== null) {
       add('trimLengthM', `only a trim has a trim length, not a ${f.kind}; leave it empty`);
+    }
+    if (f.trimPiece !== null) {
+      add('trimPiece', `only a trim is a length or a corner piece, not a ${f.kind}; leave it empty`);
     }
   }
   if (f.kind !== 'topcoat' && f.topcoatColour !== null) {

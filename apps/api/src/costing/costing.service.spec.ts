@@ -51,22 +51,32 @@ const catalogue = [
     topcoatColour: 'Moss green',
     stockUnit: 'kg',
   }),
-  // Corner pieces as the demo catalogue keeps them: trims of the drip kind with "corner" in the name.
+  // Corner pieces are told by their catalogue field, not their names: these names say nothing of
+  // corners, and the drip length below says "corner" but is a length.
   material({
     code: 'CRN-EXT',
     kind: 'trim',
-    name: 'External drip corner piece',
+    name: 'Drip piece, outside',
     trimKind: 'drip',
     trimLengthM: '0.3',
+    trimPiece: 'external-corner',
   }),
   material({
     code: 'CRN-INT',
     kind: 'trim',
-    name: 'Internal drip corner piece',
+    name: 'Drip piece, inside',
     trimKind: 'drip',
     trimLengthM: '0.3',
+    trimPiece: 'internal-corner',
   }),
-  material({ code: 'TRM-DRIP', kind: 'trim', name: 'Drip trim, 3 m', trimKind: 'drip', trimLengthM: '3' }),
+  material({
+    code: 'TRM-DRIP',
+    kind: 'trim',
+    name: 'Drip trim for corners and runs, 3 m',
+    trimKind: 'drip',
+    trimLengthM: '3',
+    trimPiece: 'length',
+  }),
 ];
 
 describe('CostingService.matchMaterials', () => {

@@ -2,6 +2,8 @@ import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   choosePacks,
+  costFromStock,
+  CostedLot,
   Decimal,
   Estimate as Takeoff,
   EstimateLine as TakeoffLine,
@@ -14,7 +16,7 @@ import {
   Unit,
 } from '@potlife/domain';
 import { EntityManager, In, Repository } from 'typeorm';
-import { Material } from '../catalogue/entities/material.entity';
+import { Material, TrimPiece } from '../catalogue/entities/material.entity';
 import { SuppliersService } from '../suppliers/suppliers.service';
 import { toStockUnit, UnitContext } from './units';
 
@@ -33,12 +35,32 @@ export interface PackPrice {
 }
 
 export interface CostedPack {
+  /** supplier: packs at the cheapest current price; stock: what is taken from one lot (size = the quantity, count 1) */
+  source: 'supplier' | 'stock';
   size: Decimal;
   label: string;
   count: number;
   price: PackPrice | null;
+  /** stock rows: the lot and its cost of one stock unit */
+  lot: { id: string; batchNumber: string | null; unitCost: Decimal } | null;
   cost: Decimal | null;
 }
+
+/** A lot the job could take, with its batch for the label. */
+export interface StockLot extends CostedLot {
+  batchNumber: string | null;
+}
+
+/**
+ * For an estimate on stock cost: the lots each material offers the job (FEFO order, unit cost),
+ * and the date they must be in date on (the job date plus the owner's margin).
+ */
+export type StockOffer = (
+  materialIds: string[],
+) => Promise<{ useBy: string; lots: ReadonlyMap<string, readonly StockLot[]> }>;
+
+/** Lots hold quantities to 3 decimal places: a need taken from stock is rounded up to them. */
+const LOT_PLACES = 3;
 
 /** One material to buy: the take-off lines that map to it, summed in its stock unit, in packs, priced. */
 export interface CostedMaterial {
@@ -48,6 +70,8 @@ export interface CostedMaterial {
   /** in the stock unit when there is a material, else the line's unit */
   quantity: Decimal;
   unit: string;
+  /** what is costed from lots (estimates on stock cost), in the stock unit */
+  stockQuantity: Decimal;
   packs: CostedPack[];
   packTotal: Decimal | null;
   leftover: Decimal | null;
@@ -69,13 +93,8 @@ type Fit = (m: Material, line: TakeoffLine, ctx: MatchContext) => number | null;
 const sameNumber = (a: Numeric | null | undefined, b: Numeric | null | undefined): boolean =>
   a !== null && a !== undefined && b !== null && b !== undefined && new Decimal(a).eq(b);
 
-/**
- * The catalogue has no field for corner pieces: a trim whose name says "corner" is one, and
- * "external" or "internal" in the name says which.
- */
-const isCornerPiece = (m: Material): boolean => /\bcorner/i.test(m.name);
-const isCorner = (m: Material, which: 'external' | 'internal'): boolean =>
-  isCornerPiece(m) && new RegExp(`\\b${which}\\b`, 'i').test(m.name);
+/** What a trim is, from its catalogue field (a trim without one is a length). */
+const pieceOf = (m: Material): TrimPiece => m.trimPiece ?? 'length';
 
 /**
  * How each take-off role finds its catalogue material: by kind and the kind's own fields. A role
@@ -114,7 +133,7 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
       return {
         kind: 'trim',
         fit: (m, _l, c) =>
-          m.trimKind === edge && !isCornerPiece(m)
+          m.trimKind === edge && pieceOf(m) === 'length'
             ? sameNumber(m.trimLengthM, c.trimLengthM)
               ? 0
               : 1
@@ -127,8 +146,8 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
       const which = role === 'corner:external' ? 'external' : 'internal';
       return {
         kind: 'trim',
-        fit: (m) => (isCorner(m, which) ? 0 : null),
-        need: `an ${which} corner piece (a trim with “${which}” and “corner” in its name)`,
+        fit: (m) => (pieceOf(m) === `${which}-corner` ? 0 : null),
+        need: `an ${which} corner piece (a trim whose piece is “${which} corner”)`,
       };
     }
     case 'outlet':
@@ -259,6 +278,8 @@ export class CostingService {
    * material summed in its stock unit (deck and bandage resin together), packs by choosePacks over
    * the material's pack sizes, each pack at the cheapest current price, then priceEstimate with
    * labour, markup and VAT. Materials with no price are left out of the material cost and counted.
+   * With `stock` (an estimate on stock cost), what the job could reserve is taken first by the
+   * domain's costFromStock at each lot's own cost, and only the remainder is bought in packs.
    */
   async costTakeoff(
     companyId: string,
@@ -268,6 +289,7 @@ export class CostingService {
     onDate: string,
     chosen?: ReadonlyMap<LineRole, string>,
     m?: EntityManager,
+    stock?: StockOffer,
   ): Promise<CostedTakeoff> {
     const { materials: lineMaterials, problems } = await this.matchMaterials(
       companyId,
@@ -306,30 +328,63 @@ export class CostingService {
       }
     }
     const prices = await this.currentPrices(companyId, [...byMaterial.keys()], onDate, m);
+    const offer = stock ? await stock([...byMaterial.keys()]) : null;
     for (const g of byMaterial.values()) {
       const material = g.material as Material;
       const sizes = material.packSizes.map((p) => p.size);
-      if (sizes.length === 0) {
-        g.problem = `${material.name} has no pack sizes in the catalogue: add the packs it is bought in.`;
-        continue;
+      const labelOf = (size: Decimal) =>
+        material.packSizes.find((s) => new Decimal(s.size).eq(size))?.label ??
+        `${size.toString()} ${material.stockUnit}`;
+      const supplierPacks = (packs: { size: Decimal; count: number }[]): CostedPack[] =>
+        packs.map((p) => {
+          const price = prices.get(priceKey(material.id, p.size.toString())) ?? null;
+          return {
+            source: 'supplier',
+            size: p.size,
+            label: labelOf(p.size),
+            count: p.count,
+            price,
+            lot: null,
+            cost: price ? roundMoney(new Decimal(price.packPrice).times(p.count)) : null,
+          };
+        });
+      let remainder = g.quantity;
+      if (offer) {
+        const lots = offer.lots.get(material.id) ?? [];
+        const split = costFromStock(
+          lots,
+          g.quantity.toDecimalPlaces(LOT_PLACES, Decimal.ROUND_UP),
+          offer.useBy,
+          [],
+        );
+        g.stockQuantity = split.stockQuantity;
+        g.packs = split.fromStock.map((part) => {
+          const lot = lots.find((l) => l.id === part.lotId);
+          return {
+            source: 'stock',
+            size: part.quantity,
+            label: `From stock, lot ${lot?.batchNumber ?? part.lotId.slice(0, 8)}`,
+            count: 1,
+            price: null,
+            lot: { id: part.lotId, batchNumber: lot?.batchNumber ?? null, unitCost: part.unitCost },
+            cost: part.cost,
+          };
+        });
+        remainder = split.remainder;
+        g.packTotal = split.stockQuantity;
+        g.leftover = split.stockQuantity.minus(g.quantity);
       }
-      const choice = choosePacks(g.quantity, sizes);
-      g.packTotal = choice.total;
-      g.leftover = choice.leftover;
-      g.packs = choice.packs.map((p) => {
-        const price = prices.get(priceKey(material.id, p.size.toString())) ?? null;
-        const label =
-          material.packSizes.find((s) => new Decimal(s.size).eq(p.size))?.label ??
-          `${p.size.toString()} ${material.stockUnit}`;
-        return {
-          size: p.size,
-          label,
-          count: p.count,
-          price,
-          cost: price ? roundMoney(new Decimal(price.packPrice).times(p.count)) : null,
-        };
-      });
-      const missing = g.packs.filter((p) => p.price === null);
+      if (!offer || remainder.gt(0)) {
+        if (sizes.length === 0) {
+          g.problem = `${material.name} has no pack sizes in the catalogue: add the packs it is bought in.`;
+          continue;
+        }
+        const choice = choosePacks(remainder, sizes);
+        g.packTotal = g.stockQuantity.plus(choice.total);
+        g.leftover = g.packTotal.minus(g.quantity);
+        g.packs.push(...supplierPacks(choice.packs));
+      }
+      const missing = g.packs.filter((p) => p.source === 'supplier' && p.price === null);
       if (missing.length > 0) {
         g.problem = `No price: no current supplier price for ${missing.map((p) => p.label).join(', ')} of ${material.name}. Add one to the supplier’s price list.`;
       } else {
@@ -339,7 +394,11 @@ export class CostingService {
     const priced = groups.filter((g) => g.cost !== null);
     const price = priceEstimate(
       priced.flatMap((g) =>
-        g.packs.map((p) => ({ quantity: p.count, unitCost: (p.price as PackPrice).packPrice })),
+        g.packs.map((p) =>
+          p.lot
+            ? { quantity: p.size, unitCost: p.lot.unitCost }
+            : { quantity: p.count, unitCost: (p.price as PackPrice).packPrice },
+        ),
       ),
       takeoff.labour.totalHours,
       money.labourRate,
@@ -363,6 +422,7 @@ function blank(
     material,
     quantity,
     unit,
+    stockQuantity: new Decimal(0),
     packs: [],
     packTotal: null,
     leftover: null,

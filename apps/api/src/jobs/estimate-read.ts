@@ -21,7 +21,7 @@ export interface EstimateBundle {
 const READ_SQL = `
   SELECT json_build_object(
     'id', e.id, 'companyId', e.company_id, 'jobId', e.job_id, 'version', e.version, 'buildUpId', e.build_up_id,
-    'buildUpName', e.build_up_name, 'buildUp', e.build_up, 'roof', e.roof, 'pricedOn', e.priced_on::text,
+    'buildUpName', e.build_up_name, 'buildUp', e.build_up, 'roof', e.roof, 'pricedOn', e.priced_on::text, 'costBasis', e.cost_basis,
     'airC', e.air_c::text, 'catalystPct', e.catalyst_pct::text, 'deckAreaM2', e.deck_area_m2::text,
     'upstandAreaM2', e.upstand_area_m2::text, 'laminatedAreaM2', e.laminated_area_m2::text, 'trimM', e.trim_m::text,
     'cornersExternal', e.corners_external, 'cornersInternal', e.corners_internal, 'cornersDerived', e.corners_derived,
@@ -39,13 +39,14 @@ const READ_SQL = `
     ) ORDER BY l.position), '[]'::json) FROM estimate_lines l WHERE l.estimate_id = e.id) AS lines,
   (SELECT coalesce(json_agg(json_build_object(
       'id', x.id, 'position', x.position, 'roles', x.roles, 'materialKind', x.material_kind, 'materialId', x.material_id,
-      'materialName', x.material_name, 'stockUnit', x.stock_unit, 'quantity', x.quantity::text, 'packTotal', x.pack_total::text,
+      'materialName', x.material_name, 'stockUnit', x.stock_unit, 'quantity', x.quantity::text, 'stockQuantity', x.stock_quantity::text, 'packTotal', x.pack_total::text,
       'leftover', x.leftover::text, 'cost', x.cost::text, 'problem', x.problem,
       'packs', (SELECT coalesce(json_agg(json_build_object(
           'id', p.id, 'estimateMaterialId', p.estimate_material_id, 'packSize', p.pack_size::text, 'label', p.label, 'count', p.count,
           'packPrice', p.pack_price::text, 'supplierId', p.supplier_id, 'supplierName', p.supplier_name,
-          'leadTimeDays', p.lead_time_days, 'cost', p.cost::text
-        ) ORDER BY p.pack_size DESC), '[]'::json) FROM estimate_packs p WHERE p.estimate_material_id = x.id)
+          'leadTimeDays', p.lead_time_days, 'cost', p.cost::text, 'source', p.source, 'lotId', p.lot_id,
+          'batchNumber', p.batch_number, 'unitCost', p.unit_cost::text
+        ) ORDER BY p.source, p.pack_size DESC), '[]'::json) FROM estimate_packs p WHERE p.estimate_material_id = x.id)
     ) ORDER BY x.position), '[]'::json) FROM estimate_materials x WHERE x.estimate_id = e.id) AS materials,
   (SELECT coalesce(json_object_agg(n.id, n.name), '{}'::json) FROM (
       SELECT mt.id, mt.name FROM materials mt WHERE mt.id IN (SELECT material_id FROM estimate_lines WHERE estimate_id = e.id)

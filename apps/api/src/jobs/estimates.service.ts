@@ -16,7 +16,7 @@ import { BuildUpsService, toDomainBuildUp } from '../build-ups/build-ups.service
 import type { BuildUp } from '../build-ups/entities/build-up.entity';
 import type { AuthUser } from '../common/current-user';
 import { RuleViolation } from '../common/http-exception.filter';
-import { CostingService } from '../costing/costing.service';
+import { CostingService, StockOffer } from '../costing/costing.service';
 import {
   CreateEstimateDto,
   EstimateMaterialResponse,
@@ -25,13 +25,14 @@ import {
   LayingCheckDto,
   LayingCheckResponse,
 } from './dto/estimate.dto';
-import { Estimate } from './entities/estimate.entity';
+import { CostBasis, Estimate } from './entities/estimate.entity';
 import { EstimateBundle, readEstimateVersion } from './estimate-read';
 import { EstimateLine } from './entities/estimate-line.entity';
 import { EstimateMaterial } from './entities/estimate-material.entity';
 import { EstimatePack } from './entities/estimate-pack.entity';
 import { Job } from './entities/job.entity';
 import { JobsService } from './jobs.service';
+import { ReservationsService } from './reservations/reservations.service';
 import { toDomainRoof } from './roof/roof';
 
 /** numeric columns come back padded ("25.000"); the API gives them plainly ("25"). */
@@ -54,11 +55,14 @@ export class EstimatesService {
     private readonly jobs: JobsService,
     private readonly buildUps: BuildUpsService,
     private readonly costing: CostingService,
+    private readonly reservations: ReservationsService,
   ) {}
 
   /**
    * A new estimate version: estimateRoof(roof, build-up) from the domain, its lines mapped to
    * catalogue materials, packed with choosePacks and priced with priceEstimate (CostingService).
+   * On stock cost, what the job could reserve for its date (ReservationsService.offeredLots, read
+   * without locks) is costed at its lots' cost first; a job without a scheduled date is refused.
    */
   async create(user: AuthUser, jobId: string, dto: CreateEstimateDto): Promise<EstimateResponse> {
     const id = await this.db.transaction(async (m) => {
@@ -76,8 +80,20 @@ export class EstimatesService {
           'no_build_up',
         );
       }
+      const costBasis: CostBasis = dto.costBasis ?? 'supplier';
+      if (costBasis === 'stock' && !job.scheduledOn) {
+        throw new RuleViolation(
+          'Give the job a scheduled date first: an estimate on stock cost uses the stock the job could reserve for its date',
+          'job_needs_date',
+        );
+      }
       const buildUp = await this.buildUps.find(user.companyId, buildUpId, m);
       return writeEstimate(m, this.costing, {
+        costBasis,
+        stock:
+          costBasis === 'stock'
+            ? (ids) => this.reservations.offeredLots(m, user.companyId, job, ids)
+            : undefined,
         companyId: user.companyId,
         userId: user.id,
         job,
@@ -112,6 +128,7 @@ export class EstimatesService {
       createdAt: e.createdAt.toISOString(),
       createdBy: e.createdBy ? { id: e.createdBy, name: e.creator ?? '' } : null,
       buildUpName: e.buildUpName,
+      costBasis: e.costBasis,
       laminatedAreaM2: plain(e.laminatedAreaM2),
       net: plain(e.net),
       gross: plain(e.gross),
@@ -143,7 +160,8 @@ export class EstimatesService {
         .createQueryBuilder('p')
         .innerJoin(EstimateMaterial, 'em', 'em.id = p.estimate_material_id')
         .where('em.estimate_id = :estimateId', { estimateId })
-        .orderBy('p.packSize', 'DESC')
+        .orderBy('p.source', 'ASC')
+        .addOrderBy('p.packSize', 'DESC')
         .getMany(),
       m
         .query(
@@ -228,7 +246,17 @@ export class EstimatesService {
       material: x.materialId ? { id: x.materialId, name: x.materialName ?? '' } : null,
       unit: x.stockUnit ?? '',
       quantity: plain(x.quantity),
+      stockQuantity: plain(x.stockQuantity ?? '0'),
       packs: x.packs.map((p) => ({
+        source: p.source ?? 'supplier',
+        lot:
+          p.source === 'stock' && p.lotId
+            ? {
+                id: p.lotId,
+                batchNumber: p.batchNumber,
+                unitCost: p.unitCost === null ? '0' : plain(p.unitCost),
+              }
+            : null,
         size: plain(p.packSize),
         label: p.label,
         count: p.count,
@@ -262,6 +290,7 @@ export class EstimatesService {
         vatRatePct: plain(e.vatRatePct),
       },
       pricedOn: e.pricedOn,
+      costBasis: e.costBasis,
       airC: plain(e.airC),
       catalystPercent: plain(e.catalystPct),
       deckAreaM2: plain(e.deckAreaM2),
@@ -339,6 +368,9 @@ export interface EstimateInput {
   airC: string;
   note: string | null;
   chosen?: ReadonlyMap<LineRole, string>;
+  /** supplier (the default) or stock; stock needs `stock`, the lots the job could take */
+  costBasis?: CostBasis;
+  stock?: StockOffer;
 }
 
 /**
@@ -353,6 +385,10 @@ export async function writeEstimate(
 ): Promise<string> {
   const { companyId, userId, job, buildUp, airC, note } = input;
   const chosen = input.chosen ?? new Map<LineRole, string>();
+  const costBasis: CostBasis = input.costBasis ?? 'supplier';
+  if (costBasis === 'stock' && !input.stock) {
+    throw new Error('An estimate on stock cost needs the lots the job could take');
+  }
   if (!job.roof) {
     throw new RuleViolation('Measure the roof first: PUT /api/jobs/{id}/roof', 'no_roof');
   }
@@ -385,6 +421,7 @@ export async function writeEstimate(
     pricedOn,
     chosen,
     m,
+    costBasis === 'stock' ? input.stock : undefined,
   );
   const [{ next }] = (await m.query(
     `SELECT coalesce(max(version), 0) + 1 AS next FROM estimates WHERE job_id = $1`,
@@ -406,6 +443,7 @@ export async function writeEstimate(
       },
       roof: job.roof,
       pricedOn,
+      costBasis,
       airC: takeoff.airC.toString(),
       catalystPct: takeoff.catalystPercent.toString(),
       deckAreaM2: takeoff.deckAreaM2.toString(),
@@ -463,6 +501,7 @@ export async function writeEstimate(
       materialName: g.material?.name ?? null,
       stockUnit: g.unit,
       quantity: g.quantity.toString(),
+      stockQuantity: g.stockQuantity.toString(),
       packTotal: g.packTotal ? g.packTotal.toString() : null,
       leftover: g.leftover ? g.leftover.toString() : null,
       cost: g.cost ? g.cost.toString() : null,
@@ -473,10 +512,14 @@ export async function writeEstimate(
         g.packs.map((pk) => ({
           companyId,
           estimateMaterialId: row.id,
+          source: pk.source,
+          lotId: pk.lot?.id ?? null,
+          batchNumber: pk.lot?.batchNumber ?? null,
+          unitCost: pk.lot ? pk.lot.unitCost.toString() : null,
           packSize: pk.size.toString(),
           label: pk.label,
           count: pk.count,
-          packPrice: pk.price?.packPrice ?? null,
+          packPrice: pk.lot ? (pk.cost as Decimal).toString() : (pk.price?.packPrice ?? null),
           supplierId: pk.price?.supplierId ?? null,
           supplierName: pk.price?.supplierName ?? null,
           leadTimeDays: pk.price?.leadTimeDays ?? null,

@@ -3,8 +3,8 @@ import { EDGE_KINDS, HAZARD_CLASSES, MATERIAL_KINDS } from '@potlife/domain';
 import type { EdgeKind, HazardClass, MaterialKind } from '@potlife/domain';
 import { Transform } from 'class-transformer';
 import { IsIn, IsOptional, IsString, Matches, MaxLength } from 'class-validator';
-import { STOCK_UNITS } from '../entities/material.entity';
-import type { StockUnit } from '../entities/material.entity';
+import { STOCK_UNITS, TRIM_PIECES } from '../entities/material.entity';
+import type { StockUnit, TrimPiece } from '../entities/material.entity';
 import { Check, checks, FieldCheck } from './checks';
 import { ACTIVE_VALUES, ActiveQuery, PageQuery } from './page.dto';
 import { DecimalRule, decimalProblem, OptionalNotNull, Trim, TrimToNull } from './validators';
@@ -102,6 +102,7 @@ export const MATERIAL_FIELD_CHECKS = {
   rollWidthM: { nullable: true, check: checks.decimal(DECIMAL_RULES.rollWidthM) },
   trimKind: { nullable: true, check: checks.oneOf(EDGE_KINDS) },
   trimLengthM: { nullable: true, check: checks.decimal(DECIMAL_RULES.trimLengthM) },
+  trimPiece: { nullable: true, check: checks.oneOf(TRIM_PIECES) },
   topcoatColour: { nullable: true, check: checks.text(60) },
   litresPerKg: { nullable: true, check: checks.decimal(DECIMAL_RULES.litresPerKg) },
   active: { nullable: false, check: checks.bool() },
@@ -163,6 +164,10 @@ export class CreateMaterialDto {
   @ApiPropertyOptional({ nullable: true, type: String, example: '1.04' }) @IsOptional() @C('rollWidthM') rollWidthM?: string | null;
   @ApiPropertyOptional({ nullable: true, enum: EDGE_KINDS }) @IsOptional() @C('trimKind') trimKind?: EdgeKind | null;
   @ApiPropertyOptional({ nullable: true, type: String, example: '3' }) @IsOptional() @C('trimLengthM') trimLengthM?: string | null;
+  @ApiPropertyOptional({ nullable: true, enum: TRIM_PIECES, description: 'trims only: a length (the default) or a corner piece' })
+  @IsOptional()
+  @C('trimPiece')
+  trimPiece?: TrimPiece | null;
   @ApiPropertyOptional({ nullable: true, type: String, maxLength: 60 }) @IsOptional() @TrimToNull() @C('topcoatColour') topcoatColour?: string | null;
   @ApiPropertyOptional({ nullable: true, type: String, example: '1.27' }) @IsOptional() @C('litresPerKg') litresPerKg?: string | null;
   @ApiPropertyOptional({ default: true }) @OptionalNotNull() @C('active') active?: boolean;
@@ -194,6 +199,7 @@ export class UpdateMaterialDto {
   @ApiPropertyOptional({ nullable: true, type: String }) @IsOptional() @C('rollWidthM') rollWidthM?: string | null;
   @ApiPropertyOptional({ nullable: true, enum: EDGE_KINDS }) @IsOptional() @C('trimKind') trimKind?: EdgeKind | null;
   @ApiPropertyOptional({ nullable: true, type: String }) @IsOptional() @C('trimLengthM') trimLengthM?: string | null;
+  @ApiPropertyOptional({ nullable: true, enum: TRIM_PIECES }) @IsOptional() @C('trimPiece') trimPiece?: TrimPiece | null;
   @ApiPropertyOptional({ nullable: true, type: String }) @IsOptional() @TrimToNull() @C('topcoatColour') topcoatColour?: string | null;
   @ApiPropertyOptional({ nullable: true, type: String }) @IsOptional() @C('litresPerKg') litresPerKg?: string | null;
   @ApiPropertyOptional() @OptionalNotNull() @C('active') active?: boolean;
@@ -263,6 +269,7 @@ export class MaterialResponse {
   @ApiProperty({ nullable: true, type: String }) rollWidthM: string | null;
   @ApiProperty({ nullable: true, enum: EDGE_KINDS }) trimKind: EdgeKind | null;
   @ApiProperty({ nullable: true, type: String }) trimLengthM: string | null;
+  @ApiProperty({ nullable: true, enum: TRIM_PIECES, description: 'trims only' }) trimPiece: TrimPiece | null;
   @ApiProperty({ nullable: true, type: String }) topcoatColour: string | null;
   @ApiProperty({ nullable: true, type: String }) litresPerKg: string | null;
   @ApiProperty() active: boolean;

@@ -5,6 +5,10 @@ import { decimalString } from '../../common/decimal.transformer';
 export type StockUnit = 'kg' | 'L' | 'm2' | 'm' | 'each';
 export const STOCK_UNITS: readonly StockUnit[] = ['kg', 'L', 'm2', 'm', 'each'];
 
+/** What a trim is: a straight length, or a corner piece (external or internal). Trims only. */
+export type TrimPiece = 'length' | 'external-corner' | 'internal-corner';
+export const TRIM_PIECES: readonly TrimPiece[] = ['length', 'external-corner', 'internal-corner'];
+
 /** A pack a material is bought and stored in: `size` in the stock unit, e.g. {size: "25", label: "25 kg drum"}. */
 export interface PackSize {
   size: string;
@@ -83,6 +87,10 @@ export class Material {
 
   @Column({ name: 'trim_length_m', type: 'numeric', precision: 6, scale: 3, nullable: true, transformer: decimalString })
   trimLengthM: string | null;
+
+  /** null for anything but a trim; a trim without one is a length */
+  @Column({ name: 'trim_piece', type: 'varchar', length: 16, nullable: true })
+  trimPiece: TrimPiece | null;
 
   @Column({ name: 'topcoat_colour', type: 'varchar', length: 60, nullable: true })
   topcoatColour: string | null;

@@ -51,6 +51,7 @@ const trim = (code: string, name: string, trimKind: 'drip' | 'kerb' | 'wall' | '
   packSizes: [{ size: '1', label: '3 m length' }],
   trimKind,
   trimLengthM: '3', // standard 3 m lengths [practice]
+  trimPiece: 'length',
   lotTracked: false,
   reorderLevel: '10',
   reorderQuantity: '20',
@@ -198,8 +199,8 @@ export const DEMO_MATERIALS: DemoMaterial[] = [
   trim('TRM-WALL', 'Wall (upstand) trim, 3 m', 'wall'),
   trim('TRM-ANGLE', 'Angle trim, 3 m', 'angle'),
   // Corner pieces are trims (domain README); trimLengthM is each leg, Potlife's own demo figure.
-  { ...trim('CRN-EXT', 'External drip corner piece', 'drip'), packSizes: [{ size: '1', label: 'corner piece' }], trimLengthM: '0.3' },
-  { ...trim('CRN-INT', 'Internal drip corner piece', 'drip'), packSizes: [{ size: '1', label: 'corner piece' }], trimLengthM: '0.3' },
+  { ...trim('CRN-EXT', 'External drip corner piece', 'drip'), packSizes: [{ size: '1', label: 'corner piece' }], trimLengthM: '0.3', trimPiece: 'external-corner' },
+  { ...trim('CRN-INT', 'Internal drip corner piece', 'drip'), packSizes: [{ size: '1', label: 'corner piece' }], trimLengthM: '0.3', trimPiece: 'internal-corner' },
   {
     code: 'OUT-110',
     name: 'Pre-formed outlet, 110 mm',
@@ -307,6 +308,7 @@ const COLUMNS: [string, keyof MaterialFields][] = [
   ['roll_width_m', 'rollWidthM'],
   ['trim_kind', 'trimKind'],
   ['trim_length_m', 'trimLengthM'],
+  ['trim_piece', 'trimPiece'],
   ['topcoat_colour', 'topcoatColour'],
   ['litres_per_kg', 'litresPerKg'],
   ['active', 'active'],

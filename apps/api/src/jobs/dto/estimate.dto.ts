@@ -13,6 +13,9 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { IsDecimalValue, trimToNull } from '../../costing/validation';
+import { COST_BASES } from '../entities/estimate.entity';
+import type { CostBasis } from '../entities/estimate.entity';
+import type { CostSource } from '../entities/estimate-pack.entity';
 
 export const LINE_ROLES: readonly LineRole[] = [
   'mat',
@@ -69,6 +72,16 @@ export class CreateEstimateDto {
   @Type(() => MaterialChoiceDto)
   materials?: MaterialChoiceDto[];
 
+  @ApiPropertyOptional({
+    enum: COST_BASES,
+    default: 'supplier',
+    description:
+      'supplier: every pack at the cheapest current supplier price; stock: what the job could reserve for its scheduled date at its lots’ own cost, only the rest bought in packs (409 job_needs_date without a date)',
+  })
+  @IsOptional()
+  @IsIn(COST_BASES, { message: `must be one of ${COST_BASES.join(', ')}` })
+  costBasis?: CostBasis;
+
   @ApiPropertyOptional()
   @IsOptional()
   @Transform(trimToNull)
@@ -109,6 +122,10 @@ export interface EstimateLineResponse {
 }
 
 export interface EstimatePackResponse {
+  /** supplier: packs to buy; stock: what is taken from one lot (size = the quantity, count 1) */
+  source: CostSource;
+  /** stock rows only: the lot and its cost of one stock unit (for the estimator, never on the quote) */
+  lot: { id: string; batchNumber: string | null; unitCost: string } | null;
   size: string;
   label: string;
   count: number;
@@ -126,6 +143,8 @@ export interface EstimateMaterialResponse {
   /** the stock unit of the material, or the line's unit when there is none */
   unit: string;
   quantity: string;
+  /** costed from lots in stock (estimates on stock cost); 0 otherwise */
+  stockQuantity: string;
   packs: EstimatePackResponse[];
   packTotal: string | null;
   leftover: string | null;
@@ -147,6 +166,7 @@ export interface EstimateResponse {
   note: string | null;
   buildUp: { id: string | null; name: string; labourRate: string; markupPct: string; vatRatePct: string };
   pricedOn: string;
+  costBasis: CostBasis;
   airC: string;
   catalystPercent: string;
   deckAreaM2: string;
@@ -183,6 +203,7 @@ export interface EstimateSummaryResponse {
   createdAt: string;
   createdBy: { id: string; name: string } | null;
   buildUpName: string;
+  costBasis: CostBasis;
   laminatedAreaM2: string;
   net: string;
   gross: string;

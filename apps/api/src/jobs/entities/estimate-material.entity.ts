@@ -36,6 +36,10 @@ export class EstimateMaterial {
   @Column({ type: 'numeric', transformer: decimalString })
   quantity: string;
 
+  /** what is costed from lots in stock (estimates on stock cost), in the stock unit */
+  @Column({ name: 'stock_quantity', type: 'numeric', default: 0, transformer: decimalString })
+  stockQuantity: string;
+
   @Column({ name: 'pack_total', type: 'numeric', nullable: true, transformer: decimalString })
   packTotal: string | null;
 

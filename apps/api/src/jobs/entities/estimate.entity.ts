@@ -12,6 +12,9 @@ export interface BuildUpSnapshot {
   vatRatePct: string;
 }
 
+export type CostBasis = 'supplier' | 'stock';
+export const COST_BASES: readonly CostBasis[] = ['supplier', 'stock'];
+
 const money = { type: 'numeric' as const, precision: 14, scale: 2, transformer: decimalString };
 /** Quantities and hours exactly as the domain gave them (numeric without a scale). */
 const qty = { type: 'numeric' as const, transformer: decimalString };
@@ -45,6 +48,10 @@ export class Estimate {
 
   @Column({ name: 'priced_on', type: 'date' })
   pricedOn: string;
+
+  /** supplier: every pack at current supplier prices; stock: what the job can reserve at its lots' cost, the rest bought */
+  @Column({ name: 'cost_basis', type: 'varchar', length: 8, default: 'supplier' })
+  costBasis: CostBasis;
 
   @Column({ name: 'air_c', ...qty })
   airC: string;

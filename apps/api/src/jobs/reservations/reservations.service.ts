@@ -14,6 +14,7 @@ import type { AuthUser } from '../../common/current-user';
 import { RuleViolation } from '../../common/http-exception.filter';
 import { CostingService } from '../../costing/costing.service';
 import { StockService } from '../../stock/stock.service';
+import { shownStatus } from '../../stock/stock-reader.service';
 import type { Estimate } from '../entities/estimate.entity';
 import { Job, jobReference } from '../entities/job.entity';
 import { JobsService, readJobSettings } from '../jobs.service';
@@ -41,6 +42,45 @@ export interface NeededMaterial {
   leadTimeDays: number | null;
   supplier: { id: string; name: string } | null;
 }
+
+/** A lot as offerLots needs it (a LockedLot, or a lot read without a lock). */
+export interface OfferableLot {
+  id: string;
+  quantity: string;
+  fefoExpiresOn: string;
+  status: string;
+  exposureFlagged: boolean;
+}
+
+/** A lot offered to a job, with its cost and batch: what the estimate on stock cost takes. */
+export interface OfferedLot extends FefoLot {
+  quantity: Decimal;
+  unitCost: string;
+  batchNumber: string | null;
+}
+
+/**
+ * The lots of one material as a job is offered them, in allocateFefo's terms: what is left of
+ * each lot after the holds given, usable only when available and not exposure-flagged. The one
+ * definition behind the reservation (reserveIn) and the estimate on stock cost (offeredLots).
+ */
+export function offerLots(
+  lots: readonly OfferableLot[],
+  holds: readonly { lotId: string; held: string }[],
+): FefoLot[] {
+  return lots.map((l) => ({
+    id: l.id,
+    quantity: Decimal.max(
+      ZERO,
+      holds.filter((h) => h.lotId === l.id).reduce((q, h) => q.minus(h.held), new Decimal(l.quantity)),
+    ),
+    expiresOn: l.fefoExpiresOn,
+    usable: l.status === 'available' && !l.exposureFlagged,
+  }));
+}
+
+/** The last day a lot must be in date for a job on `jobDate`: the date plus the owner's margin. */
+export const useByFor = (jobDate: string, marginDays: number): string => addDays(jobDate, marginDays);
 
 interface HeldRow {
   id: string;
@@ -206,7 +246,7 @@ export class ReservationsService {
     const margin = await this.settings(m, user.companyId);
     const jobDate = job.scheduledOn;
     const estimateId = job.acceptedEstimateId;
-    const useBy = addDays(jobDate, margin);
+    const useBy = useByFor(jobDate, margin);
     const { needed } = await this.neededFor(m, user.companyId, estimateId);
     const out = await this.netOut(m, user.companyId, job.id);
     const ids = needed.map((n) => n.materialId);
@@ -262,15 +302,8 @@ export class ReservationsService {
           .reduce((sum, h) => sum.plus(h.held), ZERO);
       const mineHeld = lots.reduce((sum, l) => sum.plus(heldBy(l.id, true)), ZERO);
       const need = Decimal.max(ZERO, n.needed.minus(mineHeld).minus(out.get(n.materialId) ?? ZERO));
-      const offered: FefoLot[] = lots.map((l) => ({
-        id: l.id,
-        quantity: Decimal.max(
-          ZERO,
-          new Decimal(l.quantity).minus(heldBy(l.id, false)).minus(heldBy(l.id, true)),
-        ),
-        expiresOn: l.fefoExpiresOn,
-        usable: l.status === 'available' && !l.exposureFlagged,
-      }));
+      // less what every job holds, this one's kept holds too (they already count against the need)
+      const offered = offerLots(lots, held);
       const result = allocateFefo(offered, need, useBy);
       for (const a of result.allocations) {
         holds.push([
@@ -319,6 +352,70 @@ export class ReservationsService {
       'reservation_shortfalls (company_id, job_id, estimate_id, material_id, quantity, job_date, needed_by, lead_time_days, supplier_id, supplier_name)',
       shortfalls,
     );
+  }
+
+  /**
+   * What a job could reserve of each material for its scheduled date, read without locks (for an
+   * estimate on stock cost; nothing is held): the lots with stock, offered as reserveIn offers
+   * them (offerLots), less what other jobs hold — this job's own holds stay offered to it. The
+   * lots come in FEFO order with their unit cost; allocate them with the use-by date returned.
+   */
+  async offeredLots(
+    m: EntityManager,
+    companyId: string,
+    job: Pick<Job, 'id' | 'scheduledOn'>,
+    materialIds: readonly string[],
+  ): Promise<{ useBy: string; lots: Map<string, OfferedLot[]> }> {
+    if (!job.scheduledOn) {
+      throw new RuleViolation(
+        'Give the job a scheduled date first: stock is offered for the job date',
+        'job_needs_date',
+      );
+    }
+    const margin = await this.settings(m, companyId);
+    const useBy = useByFor(job.scheduledOn, margin);
+    const out = new Map<string, OfferedLot[]>(materialIds.map((id) => [id, []]));
+    if (materialIds.length === 0) {
+      return { useBy, lots: out };
+    }
+    const rows: {
+      id: string;
+      materialId: string;
+      batchNumber: string | null;
+      expiresOn: string | null;
+      status: 'available' | 'quarantined' | 'expired' | 'written-off';
+      exposureFlagged: boolean;
+      unitCost: string;
+      quantity: string;
+    }[] = await m.query(
+      `SELECT l.id, l.material_id AS "materialId", l.batch_number AS "batchNumber", l.expires_on::text AS "expiresOn",
+              l.status, l.exposure_flagged AS "exposureFlagged", l.unit_cost::text AS "unitCost", l.quantity::text AS quantity
+         FROM lots l WHERE l.company_id = $1 AND l.material_id = ANY($2) AND l.quantity > 0
+        ORDER BY l.material_id, l.expires_on NULLS LAST, l.received_on, l.id`,
+      [companyId, [...materialIds]],
+    );
+    const held: { lotId: string; held: string }[] = rows.length
+      ? await m.query(
+          `SELECT lot_id AS "lotId", sum(quantity - issued_quantity)::text AS held FROM reservations
+            WHERE status = 'held' AND lot_id = ANY($1) AND job_id <> $2 GROUP BY lot_id`,
+          [rows.map((r) => r.id), job.id],
+        )
+      : [];
+    const lots = rows.map((r) => ({
+      ...r,
+      fefoExpiresOn: r.expiresOn ?? '9999-12-31',
+      status: shownStatus(r.status, r.expiresOn),
+    }));
+    const offered = offerLots(lots, held);
+    lots.forEach((l, i) => {
+      out.get(l.materialId)?.push({
+        ...offered[i]!,
+        quantity: new Decimal(offered[i]!.quantity),
+        unitCost: l.unitCost,
+        batchNumber: l.batchNumber,
+      });
+    });
+    return { useBy, lots: out };
   }
 
   /** Releases everything the job holds (on DELETE, and when it is lost or cancelled). */
