@@ -25,6 +25,7 @@ export function material(overrides: Partial<Material> = {}): Material {
     rollWidthM: null,
     trimKind: null,
     trimLengthM: null,
+    trimPiece: null,
     topcoatColour: null,
     litresPerKg: null,
     active: true,

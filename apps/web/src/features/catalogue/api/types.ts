@@ -10,6 +10,17 @@ export interface PackSize {
 
 export type PackingGroup = 'I' | 'II' | 'III';
 
+/** What a trim is: a straight length or a corner piece (trims only). */
+export type TrimPiece = 'length' | 'external-corner' | 'internal-corner';
+export const TRIM_PIECES: readonly TrimPiece[] = ['length', 'external-corner', 'internal-corner'];
+
+/** A trim piece in plain words, for the form, the list and the material page. */
+export const trimPieceLabels: Record<TrimPiece, string> = {
+  length: 'Straight length',
+  'external-corner': 'External corner piece',
+  'internal-corner': 'Internal corner piece',
+};
+
 export interface Material {
   id: string;
   code: string;
@@ -32,6 +43,8 @@ export interface Material {
   rollWidthM: string | null;
   trimKind: EdgeKind | null;
   trimLengthM: string | null;
+  /** trims only; the estimate takes corner pieces by it */
+  trimPiece: TrimPiece | null;
   topcoatColour: string | null;
   litresPerKg: string | null;
   active: boolean;

@@ -31,7 +31,7 @@ import {
   unitLabel,
 } from '../../../lib/material-words';
 import { useSaveMaterial } from '../api/save-material';
-import type { Material } from '../api/types';
+import { TRIM_PIECES, trimPieceLabels, type Material } from '../api/types';
 import {
   formValuesOf,
   LIQUID_KINDS,
@@ -46,6 +46,7 @@ import {
 const kindOptions = MATERIAL_KINDS.map((kind) => ({ value: kind, label: materialKindLabels[kind] }));
 const hazardOptions = HAZARD_CLASSES.map((value) => ({ value, label: hazardClassLabels[value] }));
 const trimOptions = Object.entries(trimKindLabels).map(([value, label]) => ({ value, label }));
+const trimPieceOptions = TRIM_PIECES.map((value) => ({ value, label: trimPieceLabels[value] }));
 const packingGroupOptions = [
   { value: '', label: 'None' },
   { value: 'I', label: 'I — great danger' },
@@ -250,6 +251,14 @@ function MaterialForm({
                     inputMode="decimal"
                     placeholder="3"
                     {...form.getInputProps('trimLengthM')}
+                  />
+                  <Select
+                    size="md"
+                    label="Piece"
+                    description="Estimates take corner pieces by this, not by the name"
+                    data={trimPieceOptions}
+                    allowDeselect={false}
+                    {...form.getInputProps('trimPiece')}
                   />
                 </>
               ) : null}

@@ -4,7 +4,7 @@ import { DataTable, type DataTableSortStatus } from 'mantine-datatable';
 import { useNavigate } from 'react-router-dom';
 import { hrefs } from '../../../config/paths';
 import { hazardShort, unitLabel } from '../../../lib/material-words';
-import type { Material, MaterialSort } from '../api/types';
+import { trimPieceLabels, type Material, type MaterialSort } from '../api/types';
 import { MaterialKindBadge } from './MaterialKindBadge';
 import { packsText, storageText } from './storage-text';
 
@@ -98,6 +98,11 @@ export function MaterialsTable({
           render: (material) => (
             <Group gap={6} wrap="nowrap">
               <Text size="sm">{material.name}</Text>
+              {material.kind === 'trim' ? (
+                <Text size="xs" c="dimmed" style={{ whiteSpace: 'nowrap' }}>
+                  {trimPieceLabels[material.trimPiece ?? 'length']}
+                </Text>
+              ) : null}
               {material.active ? null : (
                 <Badge
                   color="gray"

@@ -9,7 +9,7 @@ import {
 } from '@potlife/domain';
 import { z } from 'zod';
 import { STOCK_UNITS, type StockUnit } from '../../../lib/material-words';
-import type { Material, MaterialBody, PackingGroup } from '../api/types';
+import { TRIM_PIECES, type Material, type MaterialBody, type PackingGroup, type TrimPiece } from '../api/types';
 
 // The material form's values (text as typed), its rules, and the body sent to the API. The rules
 // repeat the API's (apps/api/src/catalogue/material-fields.ts) so a mistake is shown at once; the
@@ -36,6 +36,7 @@ export type MaterialFormValues = {
   rollWidthM: string;
   trimKind: EdgeKind | '';
   trimLengthM: string;
+  trimPiece: TrimPiece;
   topcoatColour: string;
   litresPerKg: string;
   notes: string;
@@ -62,6 +63,7 @@ export const MATERIAL_FORM_FIELDS = [
   'rollWidthM',
   'trimKind',
   'trimLengthM',
+  'trimPiece',
   'topcoatColour',
   'litresPerKg',
   'notes',
@@ -109,6 +111,7 @@ export function formValuesOf(material?: Material): MaterialFormValues {
       rollWidthM: '',
       trimKind: '',
       trimLengthM: '',
+      trimPiece: 'length',
       topcoatColour: '',
       litresPerKg: '',
       notes: '',
@@ -135,6 +138,7 @@ export function formValuesOf(material?: Material): MaterialFormValues {
     rollWidthM: text(material.rollWidthM),
     trimKind: material.trimKind ?? '',
     trimLengthM: text(material.trimLengthM),
+    trimPiece: material.trimPiece ?? 'length',
     topcoatColour: text(material.topcoatColour),
     litresPerKg: text(material.litresPerKg),
     notes: text(material.notes),
@@ -229,6 +233,9 @@ export const materialSchema = z
     rollWidthM: decimal('the roll width', { positive: true }),
     trimKind: z.enum(['', ...EDGE_KINDS] as [string, ...string[]]),
     trimLengthM: decimal('the trim length', { positive: true }),
+    trimPiece: z.enum(TRIM_PIECES as unknown as [TrimPiece, ...TrimPiece[]], {
+      error: 'Choose a straight length or a corner piece',
+    }),
     topcoatColour: z.string().trim().max(60, 'Keep the colour to 60 characters'),
     litresPerKg: decimal('litres per kg', { positive: true, scale: 4 }),
     notes: z.string().max(2000, 'Keep the notes to 2000 characters'),
@@ -319,6 +326,7 @@ export function materialBodyOf(values: MaterialFormValues, active = true): Mater
     rollWidthM: matFields ? orNull(values.rollWidthM) : null,
     trimKind: kind === 'trim' && values.trimKind !== '' ? (values.trimKind as EdgeKind) : null,
     trimLengthM: kind === 'trim' ? orNull(values.trimLengthM) : null,
+    trimPiece: kind === 'trim' ? values.trimPiece : null,
     topcoatColour: kind === 'topcoat' ? orNull(values.topcoatColour) : null,
     litresPerKg: orNull(values.litresPerKg),
     active,

@@ -101,10 +101,47 @@ describe('catalogue', () => {
       matGsm: 600,
       rollWidthM: '1.04',
       trimKind: null,
+      trimPiece: null,
       topcoatColour: null,
       hazardClass: 'none',
       unNumber: null,
     });
+  });
+
+  it('sends a trim as a straight length unless the piece says it is a corner', async () => {
+    const posted: MockRequest[] = [];
+    signedIn('owner', {
+      'GET /api/materials': json(
+        page([...materials, material({ id: 'trm-x', code: 'CRN-X', name: 'Outside drip piece', kind: 'trim', trimKind: 'drip', trimLengthM: '0.3', trimPiece: 'external-corner', hazardClass: 'none', unNumber: null })]),
+      ),
+      'POST /api/materials': (request) => {
+        posted.push(request);
+        return json(material({ id: 'trm-int', code: 'CRN-IN', kind: 'trim' }), 201);
+      },
+    });
+    const { user } = renderWithProviders(<AppRoutes />, { route: '/catalogue' });
+    // The list says what each trim is.
+    expect(await screen.findByText('External corner piece')).toBeInTheDocument();
+    await user.click(await screen.findByRole('button', { name: 'Add a material' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Add a material' });
+    await fill(user, within(dialog).getByLabelText('Code'), 'CRN-IN');
+    await fill(user, within(dialog).getByLabelText('Name'), 'Inside drip piece');
+    await user.click(within(dialog).getByRole('combobox', { name: 'Kind' }));
+    await user.click(await screen.findByRole('option', { name: 'Trim' }));
+    await user.click(within(dialog).getByRole('combobox', { name: 'Stock unit' }));
+    await user.click(await screen.findByRole('option', { name: 'each' }));
+    await fill(user, within(dialog).getByLabelText('Pack 1 size'), '1');
+    await fill(user, within(dialog).getByLabelText('Pack 1 name'), 'piece');
+    await user.click(within(dialog).getByRole('combobox', { name: 'Trim kind' }));
+    await user.click(await screen.findByRole('option', { name: 'Drip trim' }));
+    await fill(user, within(dialog).getByLabelText('Length (m)'), '0.3');
+    const piece = within(dialog).getByRole('combobox', { name: 'Piece' });
+    expect(piece).toHaveValue('Straight length');
+    await user.click(piece);
+    await user.click(await screen.findByRole('option', { name: 'Internal corner piece' }));
+    await user.click(within(dialog).getByRole('button', { name: 'Add material' }));
+    await waitFor(() => expect(posted).toHaveLength(1));
+    expect(posted[0]?.body).toMatchObject({ kind: 'trim', trimKind: 'drip', trimLengthM: '0.3', trimPiece: 'internal-corner' });
   });
 
   it("puts the API's refusal beside the field it names", async () => {

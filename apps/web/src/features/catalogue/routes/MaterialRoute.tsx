@@ -16,7 +16,7 @@ import { hazardClassLabels, materialKindLabel, trimKindLabels, unitLabel } from 
 import { useSessionUser } from '../../../lib/session';
 import { useMaterial } from '../api/get-material';
 import { useSetMaterialActive } from '../api/save-material';
-import type { Material } from '../api/types';
+import { trimPieceLabels, type Material } from '../api/types';
 import { canEditCatalogue } from '../components/can-edit';
 import { MaterialFormModal } from '../components/MaterialFormModal';
 import { MaterialPricesCard } from '../components/MaterialPricesCard';
@@ -48,6 +48,7 @@ function kindFacts(material: Material): ReactNode {
         <>
           <Fact label="Trim kind">{material.trimKind ? trimKindLabels[material.trimKind] : '—'}</Fact>
           <Fact label="Length">{material.trimLengthM === null ? '—' : `${material.trimLengthM} m`}</Fact>
+          <Fact label="Piece">{trimPieceLabels[material.trimPiece ?? 'length']}</Fact>
         </>
       );
     case 'topcoat':
