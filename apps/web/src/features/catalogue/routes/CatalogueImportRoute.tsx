@@ -27,6 +27,7 @@ const COLUMNS: [name: string, note: string][] = [
   ['reorder_level, reorder_quantity', 'in the stock unit (default 0)'],
   ['mat_gsm, roll_width_m', 'needed for a mat'],
   ['trim_kind, trim_length_m', 'needed for a trim: drip, kerb, wall or angle; metres'],
+  ['trim_piece', 'trims only: length, external-corner or internal-corner (empty or left out: length)'],
   ['topcoat_colour', 'topcoat only'],
   ['litres_per_kg', 'for liquids stocked by weight'],
   ['active', 'yes or no (default yes); no archives the material'],
