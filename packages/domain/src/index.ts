@@ -108,3 +108,15 @@ export type { Caution, CautionId } from './cautions';
 
 export { JOB_STATUSES, JOB_TRANSITIONS, nextJobStatuses, checkJobTransition, jobHoldsStock } from './job-status';
 export type { JobStatus, JobFacts } from './job-status';
+
+export { SCALAR_RATES } from './contracts';
+export type {
+  StoredFall,
+  StoredArea,
+  StoredEdge,
+  StoredRoof,
+  FallResult,
+  RoofSummary,
+  ScalarRate,
+  BuildUpRates,
+} from './contracts';

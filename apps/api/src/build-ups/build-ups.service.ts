@@ -2,11 +2,13 @@ import { HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   BuildUpInput,
+  BuildUpRates,
   DEFAULT_BUILD_UP,
   DomainError,
   EDGE_KINDS,
   EdgeKind,
   resolveBuildUp,
+  SCALAR_RATES,
 } from '@potlife/domain';
 import { EntityManager, QueryFailedError, Repository } from 'typeorm';
 import { RuleViolation } from '../common/http-exception.filter';
@@ -17,7 +19,7 @@ import {
   CreateBuildUpDto,
   UpdateBuildUpDto,
 } from './dto/build-up.dto';
-import { BuildUp, BuildUpRates, SCALAR_RATES } from './entities/build-up.entity';
+import { BuildUp } from './entities/build-up.entity';
 
 const perEdge = (
   r: Readonly<Record<EdgeKind, number | string | { toString(): string }>>,

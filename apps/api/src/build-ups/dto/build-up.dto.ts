@@ -1,5 +1,13 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Decimal, DEFAULT_BUILD_UP, EDGE_KINDS, EdgeKind } from '@potlife/domain';
+import {
+  BuildUpRates,
+  Decimal,
+  DEFAULT_BUILD_UP,
+  EDGE_KINDS,
+  EdgeKind,
+  SCALAR_RATES,
+  ScalarRate,
+} from '@potlife/domain';
 import { Transform, Type } from 'class-transformer';
 import {
   ArrayMaxSize,
@@ -14,7 +22,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { DecimalOptions, IsDecimalValue, isDecimalWithin, trim, trimToNull } from '../../costing/validation';
-import { BuildUp, BuildUpRates, ScalarRate, SCALAR_RATES } from '../entities/build-up.entity';
+import { BuildUp } from '../entities/build-up.entity';
 
 const POSITIVE: DecimalOptions = { min: 0, exclusiveMin: true };
 const NON_NEGATIVE: DecimalOptions = { min: 0 };

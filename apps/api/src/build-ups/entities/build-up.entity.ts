@@ -1,42 +1,6 @@
-import type { EdgeKind } from '@potlife/domain';
+import type { BuildUpRates } from '@potlife/domain';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import { decimalString } from '../../common/decimal.transformer';
-
-/** The scalar rates of a build-up (domain `BuildUp`), each a decimal string. */
-export const SCALAR_RATES = [
-  'matGsm',
-  'layers',
-  'rollWidthM',
-  'lapM',
-  'resinToGlass',
-  'topcoatKgPerM2',
-  'matWastagePct',
-  'resinWastagePct',
-  'trimLengthM',
-  'trimLapM',
-  'upstandM',
-  'bandageWidthMm',
-  'bandageGsm',
-  'bandageMPerEdgeM',
-  'bandageMPerTrimJoint',
-  'bandageMPerCorner',
-  'bandageMPerPipe',
-  'bandageMPerOutlet',
-  'extraResinKgPerPipe',
-  'extraResinKgPerOutlet',
-  'acetoneLPerM2',
-  'adhesiveTrimMPerCartridge',
-  'labourHoursPerM2',
-  'labourHoursPerTrimM',
-] as const;
-export type ScalarRate = (typeof SCALAR_RATES)[number];
-
-/** Every rate of the costing engine except pack sizes (which come from the catalogue), as stored. */
-export type BuildUpRates = Record<ScalarRate, string> & {
-  catalystBands: { fromC: string; percent: string }[];
-  battenMPerEdgeM: Record<EdgeKind, string>;
-  nailsPerEdgeM: Record<EdgeKind, string>;
-};
 
 /** A company's named build-up (GLOSSARY "build-up"): the engine's rates, labour rate, markup and VAT. */
 @Entity('build_ups')

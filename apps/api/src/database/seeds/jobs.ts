@@ -1,8 +1,7 @@
-import { Decimal, JobStatus } from '@potlife/domain';
+import { BuildUpRates, Decimal, JobStatus, StoredEdge, StoredRoof } from '@potlife/domain';
 import dayjs from 'dayjs';
 import { EntityManager } from 'typeorm';
 import { defaultRates, toDomainBuildUp } from '../../build-ups/build-ups.service';
-import { BuildUpRates } from '../../build-ups/entities/build-up.entity';
 import { BuildUp } from '../../build-ups/entities/build-up.entity';
 import { CatalogueService } from '../../catalogue/catalogue.service';
 import { Material } from '../../catalogue/entities/material.entity';
@@ -15,7 +14,6 @@ import type { JobsService } from '../../jobs/jobs.service';
 import { ReservationsService } from '../../jobs/reservations/reservations.service';
 import { SiteStockService } from '../../jobs/reservations/site-stock.service';
 import { summariseRoof } from '../../jobs/roof/roof';
-import type { StoredEdge, StoredRoof } from '../../jobs/roof/roof.types';
 import { IdempotencyService } from '../../stock/idempotency.service';
 import { LedgerService } from '../../stock/ledger.service';
 import { MovementsService } from '../../stock/movements.service';

@@ -1,7 +1,7 @@
 import type { JobStatus } from '@potlife/domain';
 import type { Substrate } from '../entities/job.entity';
-import type { RoofSummary } from '../roof/roof';
-import type { StoredRoof } from '../roof/roof.types';
+import type { RoofSummary } from '@potlife/domain';
+import type { StoredRoof } from '@potlife/domain';
 
 export interface Named {
   id: string;

@@ -1,8 +1,8 @@
 import type { Caution } from '@potlife/domain';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 import { decimalString } from '../../common/decimal.transformer';
-import type { BuildUpRates } from '../../build-ups/entities/build-up.entity';
-import type { StoredRoof } from '../roof/roof.types';
+import type { BuildUpRates } from '@potlife/domain';
+import type { StoredRoof } from '@potlife/domain';
 
 /** What the estimate was priced with: the build-up's rates and money settings at the time. */
 export interface BuildUpSnapshot {

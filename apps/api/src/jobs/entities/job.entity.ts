@@ -1,6 +1,6 @@
 import type { JobStatus } from '@potlife/domain';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
-import type { StoredRoof } from '../roof/roof.types';
+import type { StoredRoof } from '@potlife/domain';
 
 export const SUBSTRATES = ['timber-deck', 'osb', 'existing-felt', 'asphalt', 'concrete', 'old-grp'] as const;
 export type Substrate = (typeof SUBSTRATES)[number];

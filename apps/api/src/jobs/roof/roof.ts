@@ -8,13 +8,16 @@ import {
   EdgeKind,
   estimateRoof,
   Estimate as Takeoff,
+  FallResult,
   polygonArea,
   rectangleArea,
   Roof,
+  RoofSummary,
+  StoredArea,
+  StoredRoof,
 } from '@potlife/domain';
 import { RuleViolation } from '../../common/http-exception.filter';
 import { PutRoofDto } from './roof.dto';
-import { StoredArea, StoredRoof } from './roof.types';
 
 /** A refusal of bad geometry: 422, pointing at the area or edge. */
 export class RoofRefused extends RuleViolation {
@@ -91,32 +94,6 @@ export function toDomainRoof(roof: StoredRoof, airC?: string): Roof {
     ...(roof.corners ? { corners: roof.corners } : {}),
     ...(airC !== undefined ? { airC } : {}),
   };
-}
-
-export interface FallResult {
-  areaIndex: number;
-  areaName: string;
-  riseMm: string;
-  runM: string;
-  /** "1:40" */
-  ratio: string;
-  level: 'ok' | 'warning' | 'error';
-  message: string;
-}
-
-export interface RoofSummary {
-  areas: { index: number; name: string; shape: 'rectangle' | 'polygon'; areaM2: string }[];
-  deckAreaM2: string;
-  upstandAreaM2: string;
-  laminatedAreaM2: string;
-  trimM: string;
-  trimMByKind: Record<EdgeKind, string>;
-  corners: { external: number; internal: number; derived: boolean };
-  pipes: number;
-  outlets: number;
-  falls: FallResult[];
-  /** sentences for the estimator: fall warnings and errors, areas without a fall */
-  warnings: string[];
 }
 
 const MM_PER_M = 1000;

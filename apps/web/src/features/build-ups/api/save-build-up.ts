@@ -1,6 +1,7 @@
+import type { BuildUpRates } from '@potlife/domain';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPatch, apiPost } from '../../../lib/api-client';
-import { buildUpsKeys, type BuildUp, type BuildUpRates } from './get-build-ups';
+import { buildUpsKeys, type BuildUp } from './get-build-ups';
 
 export type BuildUpBody = Partial<BuildUpRates> & {
   name?: string;

@@ -1,5 +1,5 @@
-import { DEFAULT_BUILD_UP, EDGE_KINDS, type EdgeKind } from '@potlife/domain';
-import type { BuildUp, ScalarRate } from '../api/get-build-ups';
+import { DEFAULT_BUILD_UP, EDGE_KINDS, type EdgeKind, type ScalarRate } from '@potlife/domain';
+import type { BuildUp } from '../api/get-build-ups';
 
 // The build-up form's fields, their units and bounds (the API's bounds, so a bad rate is refused
 // here, beside the field, before anything is sent).

@@ -1,4 +1,14 @@
-import type { Caution, EdgeKind, JobStatus, LineRole, MaterialKind, Unit } from '@potlife/domain';
+import type {
+  Caution,
+  EdgeKind,
+  JobStatus,
+  LineRole,
+  MaterialKind,
+  RoofSummary,
+  StoredFall,
+  StoredRoof,
+  Unit,
+} from '@potlife/domain';
 
 // The shapes the jobs API answers with (apps/api/src/jobs/dto). Amounts and quantities are decimal
 // strings; they are formatted for display, never computed with here.
@@ -89,62 +99,8 @@ export interface BuildUpChoice {
   [rate: string]: unknown;
 }
 
-// The roof as the API stores it.
-export interface StoredFall {
-  riseMm: string;
-  runM: string;
-}
-
-export interface StoredArea {
-  name: string;
-  shape: 'rectangle' | 'polygon';
-  lengthM?: string;
-  widthM?: string;
-  points?: [string, string][];
-  fall: StoredFall | null;
-}
-
-export interface StoredEdge {
-  kind: EdgeKind;
-  lengthM: string;
-  upstandM: string | null;
-  areaIndex: number | null;
-  side: number | null;
-  label: string | null;
-}
-
-export interface StoredRoof {
-  areas: StoredArea[];
-  edges: StoredEdge[];
-  pipes: number;
-  outlets: number;
-  corners: { external: number; internal: number } | null;
-  notes: string | null;
-}
-
-export interface FallResult {
-  areaIndex: number;
-  areaName: string;
-  riseMm: string;
-  runM: string;
-  ratio: string;
-  level: 'ok' | 'warning' | 'error';
-  message: string;
-}
-
-export interface RoofSummary {
-  areas: { index: number; name: string; shape: 'rectangle' | 'polygon'; areaM2: string }[];
-  deckAreaM2: string;
-  upstandAreaM2: string;
-  laminatedAreaM2: string;
-  trimM: string;
-  trimMByKind: Record<EdgeKind, string>;
-  corners: { external: number; internal: number; derived: boolean };
-  pipes: number;
-  outlets: number;
-  falls: FallResult[];
-  warnings: string[];
-}
+// The roof as the API stores it, and its summary: one definition in the domain for both sides.
+export type { StoredFall, StoredArea, StoredEdge, StoredRoof, FallResult, RoofSummary } from '@potlife/domain';
 
 export interface RoofRecord {
   jobId: string;
