@@ -93,6 +93,12 @@ const JobRoute = lazy(() =>
 const CalendarRoute = lazy(() =>
   import('../features/calendar/routes/CalendarRoute').then((m) => ({ default: m.CalendarRoute })),
 );
+const CustomersRoute = lazy(() =>
+  import('../features/customers/routes/CustomersRoute').then((m) => ({ default: m.CustomersRoute })),
+);
+const CustomerRoute = lazy(() =>
+  import('../features/customers/routes/CustomerRoute').then((m) => ({ default: m.CustomerRoute })),
+);
 const BuildUpsRoute = lazy(() =>
   import('../features/build-ups/routes/BuildUpsRoute').then((m) => ({ default: m.BuildUpsRoute })),
 );
@@ -289,6 +295,22 @@ export const routes: RouteObject[] = [
         element: (
           <RequireRole roles={rolesFor('calendar')}>
             <CalendarRoute />
+          </RequireRole>
+        ),
+      },
+      {
+        path: paths.customers,
+        element: (
+          <RequireRole roles={rolesFor('customers')}>
+            <CustomersRoute />
+          </RequireRole>
+        ),
+      },
+      {
+        path: paths.customer,
+        element: (
+          <RequireRole roles={rolesFor('customers')}>
+            <CustomerRoute />
           </RequireRole>
         ),
       },

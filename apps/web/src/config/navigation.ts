@@ -1,4 +1,5 @@
 import {
+  IconAddressBook,
   IconBooks,
   IconCalendarEvent,
   IconClipboardList,
@@ -27,6 +28,7 @@ export type NavKey =
   | 'jobs'
   | 'calendar'
   | 'buildUps'
+  | 'customers'
   | 'catalogue'
   | 'suppliers'
   | 'receipts'
@@ -102,6 +104,14 @@ export const navigation: readonly NavEntry[] = [
     icon: IconCalendarEvent,
     roles: ['owner', 'estimator', 'storeman'],
     summary: 'The scheduled jobs month by month, and whether their materials are all reserved or short.',
+  },
+  {
+    key: 'customers',
+    label: 'Customers',
+    to: paths.customers,
+    icon: IconAddressBook,
+    roles: ['owner', 'estimator'],
+    summary: 'Who the roofs are for: contacts, billing addresses, and each customer’s jobs with their value.',
   },
   {
     key: 'buildUps',

@@ -25,6 +25,8 @@ export const paths = {
   job: '/jobs/:jobId',
   calendar: '/calendar',
   buildUps: '/build-ups',
+  customers: '/customers',
+  customer: '/customers/:customerId',
 } as const;
 
 export const hrefs = {
@@ -39,6 +41,7 @@ export const hrefs = {
     locationId ? `${paths.temperatures}?location=${encodeURIComponent(locationId)}` : paths.temperatures,
   material: (materialId: string) => `/catalogue/materials/${encodeURIComponent(materialId)}`,
   supplier: (supplierId: string) => `/suppliers/${encodeURIComponent(supplierId)}`,
+  customer: (customerId: string) => `/customers/${encodeURIComponent(customerId)}`,
   job: (jobId: string, tab?: string) =>
     `/jobs/${encodeURIComponent(jobId)}${tab ? `?tab=${encodeURIComponent(tab)}` : ''}`,
 } as const;
