@@ -6,7 +6,7 @@ import { sql } from './stock-fixtures';
 /**
  * The whole demo, as `npm start` seeds it: a dozen jobs at every stage, the nearer scheduled jobs
  * holding all they need, the big walkway job short (it is there to show a shortfall), a job in
- * progress with stock out, a completed job with returns. Safe to run twice.
+ * progress with stock out, a completed job with returns, hours booked by the crews. Safe to run twice.
  */
 describe('demo seed', () => {
   let t: TestApp;
@@ -35,7 +35,8 @@ describe('demo seed', () => {
     ]);
     await seedDemo(t.app.get(DataSource));
     const counts = `SELECT (SELECT count(*)::int FROM jobs) AS jobs, (SELECT count(*)::int FROM estimates) AS estimates,
-                           (SELECT count(*)::int FROM reservations) AS reservations, (SELECT count(*)::int FROM stock_movements) AS movements`;
+                           (SELECT count(*)::int FROM reservations) AS reservations, (SELECT count(*)::int FROM stock_movements) AS movements,
+                           (SELECT count(*)::int FROM job_labour_entries) AS labour`;
     const [again] = await sql<Record<string, number>>(t, counts);
     await seedDemo(t.app.get(DataSource));
     expect((await sql(t, counts))[0]).toEqual(again);
@@ -65,5 +66,19 @@ describe('demo seed', () => {
     expect(out!.issued).toBeGreaterThan(5);
     expect(out!.returned).toBeGreaterThanOrEqual(1);
     expect(out!.inProgressShort).toBe(0);
+  });
+
+  it('has the hours the crews booked on the finished and started jobs', async () => {
+    const rows = await sql<{ status: string; hours: string }>(
+      t,
+      `SELECT j.status, sum(l.hours)::text AS hours FROM job_labour_entries l JOIN jobs j ON j.id = l.job_id
+        WHERE l.removed_at IS NULL GROUP BY j.status ORDER BY j.status`,
+    );
+    // the demo's own figures: 4.5 + 4.5 + 1.5 on the kitchen roof, 4 + 4 so far on the workshop, 4 on the summerhouse
+    expect(rows).toEqual([
+      { status: 'complete', hours: '10.50' },
+      { status: 'in-progress', hours: '8.00' },
+      { status: 'invoiced', hours: '4.00' },
+    ]);
   });
 });

@@ -172,6 +172,8 @@ interface DemoJob {
   airC?: string;
   stock?: 'reserve' | 'issue' | 'issue-and-return';
   notes?: string;
+  /** hours the crew booked: [days from the seed's day, who, hours, note] */
+  labour?: [number, string, string, string?][];
 }
 
 const JOBS: DemoJob[] = [
@@ -286,6 +288,10 @@ const JOBS: DemoJob[] = [
     }),
     airC: '11',
     stock: 'issue',
+    labour: [
+      [0, 'Jonah Brill', '4', 'Stripped the old topcoat back and ground the laps'],
+      [0, 'Bea Tarrant', '4'],
+    ],
   },
   {
     title: 'Kitchen flat roof, 41 Wendle Road',
@@ -302,6 +308,12 @@ const JOBS: DemoJob[] = [
       outlets: 1,
     }),
     stock: 'issue-and-return',
+    // More than the estimate's 8.6 h: the topcoat went on the next morning after a damp evening.
+    labour: [
+      [-6, 'Sol Okon', '4.5'],
+      [-6, 'Ravi Dent', '4.5'],
+      [-5, 'Sol Okon', '1.5', 'Topcoat after the dew had gone'],
+    ],
   },
   {
     title: 'Summerhouse roof, Hollowmere Allotments',
@@ -314,6 +326,7 @@ const JOBS: DemoJob[] = [
     colour: 'Moss green',
     buildUp: 0,
     roof: rectangle('Summerhouse', '3', '2.5', around('3', '2.5', ['drip', 'kerb', 'drip', 'kerb'])),
+    labour: [[-40, 'Sol Okon', '4']],
   },
   {
     title: 'Garden room, 9 Sorrel Mews',
@@ -498,6 +511,20 @@ export async function seedJobs(m: EntityManager, ctx: SeedContext): Promise<void
           to,
           ctx.userIds.estimator,
           to === 'lost' || to === 'cancelled' ? (d.notes ?? null) : null,
+        ],
+      );
+    }
+    for (const [day, who, hours, note] of d.labour ?? []) {
+      await m.query(
+        `INSERT INTO job_labour_entries (company_id, job_id, worked_on, hours, crew_member, note, created_by) VALUES ($1, $2, $3, $4, $5, $6, $7)`,
+        [
+          companyId,
+          job.id,
+          today.add(day, 'day').format('YYYY-MM-DD'),
+          hours,
+          who,
+          note ?? null,
+          ctx.userIds.estimator,
         ],
       );
     }
