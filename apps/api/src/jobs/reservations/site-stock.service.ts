@@ -530,7 +530,9 @@ export class SiteStockService {
         if (free.get(l.id)!.isZero() && h?.refs) {
           flags.push({
             code: 'held-for-other-jobs',
-            message: `All of it is reserved for ${h.refs}.`,
+            message: new Decimal(h.mine).gt(0)
+              ? `All of it is reserved: for this job's reserved lines and for ${h.refs}.`
+              : `All of it is reserved for ${h.refs}.`,
           });
         }
         if (flags.length > 0) {

@@ -289,6 +289,11 @@ export function UnreservedNeeds({ job, needs, canIssue }: UnreservedNeedsProps) 
   if (needs.length === 0) {
     return null;
   }
+  // What can go now first; what has to be ordered after it.
+  const ordered = [
+    ...needs.filter((n) => n.candidates.length > 0),
+    ...needs.filter((n) => n.candidates.length === 0),
+  ];
   return (
     <Stack gap="xs" component="section" aria-label="Needed but not reserved">
       <div>
@@ -300,7 +305,7 @@ export function UnreservedNeeds({ job, needs, canIssue }: UnreservedNeedsProps) 
           other jobs hold; the first to expire is suggested.
         </Text>
       </div>
-      {needs.map((n) => (
+      {ordered.map((n) => (
         <NeedCard
           // A fresh pick list (after an issue) starts the need again from its new suggestion.
           key={`${n.material.id}:${n.quantity}:${n.candidates.map((c) => `${c.lot.id}=${c.free}`).join(',')}`}
