@@ -9,6 +9,7 @@ export interface CreateJobBody {
   siteAddress: string;
   substrate: Substrate;
   scheduledOn?: string | null;
+  estimatorId?: string | null;
   crew?: string | null;
   topcoatColour?: string | null;
   buildUpId?: string | null;

@@ -380,12 +380,59 @@ export interface Reconciliation {
   jobId: string;
   estimate: { id: string; version: number } | null;
   materials: ReconciliationMaterial[];
+  /** the estimate's hours against those the crew recorded */
+  labour: ReconciliationLabour;
   totals: {
     price: string | null;
     estimatedMaterials: string | null;
     actualMaterials: string;
+    /** the labour in the margin: recorded hours at the estimate's rate, or the estimate's labour */
     labour: string | null;
+    labourBasis: LabourBasis;
     margin: string | null;
     marginPct: string | null;
   };
+}
+
+// Labour: the hours a crew actually worked (GET /api/jobs/:id/labour) and how the reconciliation uses them.
+
+export type LabourBasis = 'recorded' | 'estimate';
+
+export interface ReconciliationLabour {
+  basis: LabourBasis;
+  estimatedHours: string | null;
+  recordedHours: string;
+  entries: number;
+  /** £ per hour, the accepted estimate's */
+  rate: string | null;
+  estimatedCost: string | null;
+  recordedCost: string | null;
+}
+
+export interface LabourEntry {
+  id: string;
+  workedOn: string;
+  hours: string;
+  crewMember: string;
+  note: string | null;
+  createdBy: Named | null;
+  createdAt: string;
+  removed: { at: string; by: Named | null; reason: string | null } | null;
+}
+
+export interface JobLabour {
+  jobId: string;
+  open: boolean;
+  closedReason: string | null;
+  estimatedHours: string | null;
+  recordedHours: string;
+  byCrewMember: { crewMember: string; hours: string }[];
+  entries: LabourEntry[];
+}
+
+/** Someone who can be a job's estimator (GET /api/users/estimators). */
+export interface Estimator {
+  id: string;
+  name: string;
+  role: 'owner' | 'estimator';
 }

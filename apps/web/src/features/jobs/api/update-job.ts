@@ -8,6 +8,7 @@ export interface UpdateJobBody {
   siteAddress?: string;
   substrate?: Substrate;
   scheduledOn?: string | null;
+  estimatorId?: string | null;
   crew?: string | null;
   topcoatColour?: string | null;
   buildUpId?: string | null;

@@ -21,7 +21,9 @@ import { useBuildUps } from '../api/get-build-ups';
 import { useCreateCustomer } from '../api/create-customer';
 import { useCreateJob } from '../api/create-job';
 import { useCustomers } from '../api/get-customers';
+import { useEstimators } from '../api/get-estimators';
 import { SUBSTRATES, type JobDetail, type Substrate } from '../api/types';
+import { useSessionUser } from '../../../lib/session';
 import { substrateLabels } from '../utils/labels';
 
 const optionalText = (max: number) => z.string().trim().max(max, `Keep it to ${max} characters`);
@@ -41,6 +43,7 @@ export const createJobSchema = z.object({
     .string()
     .refine((v) => v === '' || /^\d{4}-\d{2}-\d{2}$/.test(v), 'Enter a date, or leave it empty'),
   buildUpId: z.string().nullable(),
+  estimatorId: z.string().nullable(),
   topcoatColour: optionalText(60),
   crew: optionalText(160),
   notes: optionalText(4000),
@@ -83,6 +86,7 @@ type CreateJobValues = {
   substrate: Substrate | null;
   scheduledOn: string;
   buildUpId: string | null;
+  estimatorId: string | null;
   topcoatColour: string;
   crew: string;
   notes: string;
@@ -101,6 +105,7 @@ const initialValues: CreateJobValues = {
   substrate: null,
   scheduledOn: '',
   buildUpId: null,
+  estimatorId: null,
   topcoatColour: '',
   crew: '',
   notes: '',
@@ -117,14 +122,18 @@ interface CreateJobModalProps {
 
 /** A new job: its customer (chosen or added here), the site and what the roof is laid on. */
 export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalProps) {
+  const me = useSessionUser();
+  // The estimator is me when I estimate; otherwise the form asks (the API checks either way).
+  const mine = me.role === 'owner' || me.role === 'estimator' ? me.id : null;
   const form = useForm<CreateJobValues>({
-    initialValues,
+    initialValues: { ...initialValues, estimatorId: mine },
     validate: (values) => ({ ...fieldsResolver(values), ...customerErrors(values) }),
   });
   const [search, setSearch] = useState('');
   const [debounced] = useDebouncedValue(search, 250);
   const customers = useCustomers(debounced, opened);
   const buildUps = useBuildUps(opened);
+  const estimators = useEstimators(opened);
   const createCustomer = useCreateCustomer();
   const createJob = useCreateJob();
   // A customer added here is kept even if the job then fails, so nothing is typed twice.
@@ -175,6 +184,7 @@ export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalPro
         substrate: values.substrate,
         scheduledOn: values.scheduledOn === '' ? null : values.scheduledOn,
         buildUpId: values.buildUpId,
+        estimatorId: values.estimatorId,
         topcoatColour: orNull(values.topcoatColour),
         crew: orNull(values.crew),
         notes: orNull(values.notes),
@@ -272,6 +282,18 @@ export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalPro
               />
               <TextInput label="Topcoat colour" {...form.getInputProps('topcoatColour')} />
               <TextInput label="Crew" {...form.getInputProps('crew')} />
+              <Select
+                label="Estimator"
+                placeholder={estimators.isPending ? 'Loading people…' : 'Nobody yet'}
+                description="Who measures and prices it"
+                data={(estimators.data ?? []).map((p) => ({
+                  value: p.id,
+                  label: p.id === me.id ? `${p.name} (me)` : p.name,
+                }))}
+                clearable
+                comboboxProps={{ withinPortal: true }}
+                {...form.getInputProps('estimatorId')}
+              />
             </SimpleGrid>
             <Textarea label="Notes" rows={2} {...form.getInputProps('notes')} />
           </Stack>

@@ -5,6 +5,7 @@ import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { useEffect } from 'react';
 import { z } from 'zod';
 import { useBuildUps } from '../api/get-build-ups';
+import { useEstimators } from '../api/get-estimators';
 import { useUpdateJob } from '../api/update-job';
 import { SUBSTRATES, type JobDetail, type Substrate } from '../api/types';
 import { substrateLabels } from '../utils/labels';
@@ -19,6 +20,7 @@ export const editJobSchema = z.object({
     .string()
     .refine((v) => v === '' || /^\d{4}-\d{2}-\d{2}$/.test(v), 'Enter a date, or leave it empty'),
   buildUpId: z.string().nullable(),
+  estimatorId: z.string().nullable(),
   topcoatColour: text(60),
   crew: text(160),
   notes: text(4000),
@@ -30,6 +32,7 @@ type EditJobValues = {
   substrate: Substrate | null;
   scheduledOn: string;
   buildUpId: string | null;
+  estimatorId: string | null;
   topcoatColour: string;
   crew: string;
   notes: string;
@@ -42,6 +45,7 @@ function valuesOf(job: JobDetail): EditJobValues {
     substrate: job.substrate,
     scheduledOn: job.scheduledOn ?? '',
     buildUpId: job.buildUp?.id ?? null,
+    estimatorId: job.estimator?.id ?? null,
     topcoatColour: job.topcoatColour ?? '',
     crew: job.crew ?? '',
     notes: job.notes ?? '',
@@ -64,6 +68,7 @@ export function EditJobModal({
     validate: zod4Resolver(editJobSchema, { errorPriority: 'first' }),
   });
   const buildUps = useBuildUps(opened);
+  const estimators = useEstimators(opened);
   const update = useUpdateJob();
 
   useEffect(() => {
@@ -87,6 +92,8 @@ export function EditJobModal({
         substrate: values.substrate,
         scheduledOn: values.scheduledOn === '' ? null : values.scheduledOn,
         buildUpId: values.buildUpId,
+        // Sent only when changed: someone who has left would be refused as a new choice.
+        estimatorId: values.estimatorId !== (job.estimator?.id ?? null) ? values.estimatorId : undefined,
         topcoatColour: orNull(values.topcoatColour),
         crew: orNull(values.crew),
         notes: orNull(values.notes),
@@ -105,6 +112,14 @@ export function EditJobModal({
       ? [{ value: job.buildUp.id, label: job.buildUp.name }]
       : []),
     ...(buildUps.data ?? []).map((b) => ({ value: b.id, label: b.name })),
+  ];
+
+  // Someone who has since left stays shown on their job until another is chosen.
+  const estimatorOptions = [
+    ...(job.estimator && !(estimators.data ?? []).some((p) => p.id === job.estimator?.id)
+      ? [{ value: job.estimator.id, label: `${job.estimator.name} (no longer estimates)` }]
+      : []),
+    ...(estimators.data ?? []).map((p) => ({ value: p.id, label: p.name })),
   ];
 
   return (
@@ -132,6 +147,14 @@ export function EditJobModal({
             />
             <TextInput label="Topcoat colour" {...form.getInputProps('topcoatColour')} />
             <TextInput label="Crew" {...form.getInputProps('crew')} />
+            <Select
+              label="Estimator"
+              placeholder="Nobody chosen"
+              data={estimatorOptions}
+              clearable
+              comboboxProps={{ withinPortal: true }}
+              {...form.getInputProps('estimatorId')}
+            />
           </SimpleGrid>
           <Textarea label="Notes" rows={2} {...form.getInputProps('notes')} />
           <Group justify="flex-end" gap="sm">

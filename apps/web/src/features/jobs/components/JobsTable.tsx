@@ -140,6 +140,18 @@ export function JobsTable({
             ),
         },
         {
+          accessor: 'estimator',
+          title: 'Estimator',
+          render: (job) =>
+            job.estimator ? (
+              job.estimator.name
+            ) : (
+              <Text size="sm" c="dimmed">
+                Nobody yet
+              </Text>
+            ),
+        },
+        {
           accessor: 'materialState',
           title: 'Materials',
           noWrap: true,

@@ -12,7 +12,7 @@ import {
   Title,
 } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconCalculator, IconFiles, IconPackages, IconPencil, IconRuler2 } from '@tabler/icons-react';
+import { IconCalculator, IconClockHour4, IconFiles, IconPackages, IconPencil, IconRuler2 } from '@tabler/icons-react';
 import { useState, type ReactNode } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { PageLoader } from '../../../components/PageLoader';
@@ -28,12 +28,13 @@ import { JobStatusBadge, MaterialStateBadge } from '../components/JobStatusBadge
 import { StatusHistory } from '../components/StatusHistory';
 import { StatusMenu } from '../components/StatusMenu';
 import { EstimateTab } from '../components/estimate/EstimateTab';
+import { LabourTab } from '../components/labour/LabourTab';
 import { MaterialsTab } from '../components/materials/MaterialsTab';
 import { RoofTab } from '../components/roof/RoofTab';
 import { formatMoney } from '../utils/format';
 import { substrateLabels } from '../utils/labels';
 
-const TABS = ['roof', 'estimate', 'materials', 'documents'] as const;
+const TABS = ['roof', 'estimate', 'materials', 'labour', 'documents'] as const;
 type Tab = (typeof TABS)[number];
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
@@ -59,7 +60,7 @@ export function JobRoute() {
   const canEdit = user.role !== 'storeman';
 
   const asked = params.get('tab');
-  const available: Tab[] = seesPrices ? [...TABS] : ['roof', 'materials', 'documents'];
+  const available: Tab[] = seesPrices ? [...TABS] : ['roof', 'materials', 'labour', 'documents'];
   const fallback: Tab = seesPrices ? 'roof' : 'materials';
   const tab: Tab = available.find((t) => t === asked) ?? fallback;
   const go = (next: Tab) => setParams({ tab: next }, { replace: true });
@@ -128,7 +129,7 @@ export function JobRoute() {
       </Group>
 
       <Paper withBorder p="md" radius="md">
-        <SimpleGrid cols={{ base: 2, sm: 3, lg: 6 }} spacing="md">
+        <SimpleGrid cols={{ base: 2, sm: 4, lg: 7 }} spacing="md">
           <Fact label="Customer">
             {j.customer.name}
             {j.customerContact.contactName ? ` (${j.customerContact.contactName})` : ''}
@@ -146,6 +147,7 @@ export function JobRoute() {
           <Fact label="Laid on">{substrateLabels[j.substrate]}</Fact>
           <Fact label="Build-up">{j.buildUp?.name ?? 'Not chosen'}</Fact>
           <Fact label="Crew">{j.crew ?? '—'}</Fact>
+          <Fact label="Estimator">{j.estimator?.name ?? 'Not chosen'}</Fact>
         </SimpleGrid>
         {j.notes ? (
           <Text size="sm" mt="sm">
@@ -168,6 +170,9 @@ export function JobRoute() {
           <Tabs.Tab value="materials" leftSection={<IconPackages size={16} />}>
             Materials
           </Tabs.Tab>
+          <Tabs.Tab value="labour" leftSection={<IconClockHour4 size={16} />}>
+            Labour
+          </Tabs.Tab>
           <Tabs.Tab value="documents" leftSection={<IconFiles size={16} />}>
             Documents
           </Tabs.Tab>
@@ -188,6 +193,9 @@ export function JobRoute() {
             onGoToEstimate={seesPrices ? () => go('estimate') : undefined}
             onEditJob={canEdit ? edit.open : undefined}
           />
+        </Tabs.Panel>
+        <Tabs.Panel value="labour" pt="md">
+          <LabourTab job={j} canEdit={canEdit} />
         </Tabs.Panel>
         <Tabs.Panel value="documents" pt="md">
           <DocumentsTab

@@ -7,6 +7,7 @@ import { compareValues } from '../../../../lib/format';
 import { useReconciliation } from '../../api/get-reconciliation';
 import type { ReconciliationMaterial } from '../../api/types';
 import { formatMoney, formatNumber, formatQuantity } from '../../utils/format';
+import { LabourCostLine } from '../labour/LabourCostLine';
 
 const PAGE_SIZE = 15;
 
@@ -86,6 +87,7 @@ export function ReconciliationPanel({ jobId }: { jobId: string }) {
             }
           />
         </SimpleGrid>
+        <LabourCostLine reconciliation={rec.data} />
         <DataTable<ReconciliationMaterial>
           withTableBorder
           borderRadius="md"
