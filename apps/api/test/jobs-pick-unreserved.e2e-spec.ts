@@ -233,6 +233,10 @@ describe('the pick list for unreserved needs', () => {
       issued: '7',
       outstanding: '8',
     });
+    // Something went out but 8 kg is still neither held nor issued: the list says "not reserved"
+    // (a reservation would look for it), not "issued".
+    const list = await t.http().get(`/api/jobs`).set(auth(estimator)).expect(200);
+    expect(list.body.items.find((j: any) => j.id === job.id).materialState).toBe('not-reserved');
   });
 
   it('a lot in two places needs its location; another job’s stock is refused with the reason', async () => {
