@@ -1,12 +1,17 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPost } from '../../../lib/api-client';
 import { jobsKeys } from './keys';
-import type { Estimate } from './types';
+import type { LineRole } from '@potlife/domain';
+import type { CostBasis, Estimate } from './types';
 
 export interface CreateEstimateBody {
   buildUpId?: string;
   airC?: string;
   note?: string | null;
+  /** supplier prices (the default) or the stock the job could reserve for its date */
+  costBasis?: CostBasis;
+  /** a material for a role instead of the best fit */
+  materials?: { role: LineRole; materialId: string }[];
 }
 
 export function createEstimate({

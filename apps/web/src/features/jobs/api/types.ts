@@ -146,7 +146,14 @@ export interface EstimateLine {
   material: Named | null;
 }
 
+/** supplier: packs at current supplier prices; stock: what the job could reserve, at its lots' cost. */
+export type CostBasis = 'supplier' | 'stock';
+
 export interface EstimatePack {
+  /** supplier: packs to buy; stock: taken from one lot (size = the quantity, count 1) */
+  source: 'supplier' | 'stock';
+  /** stock rows: the lot and its cost of one stock unit (never on the quote) */
+  lot: { id: string; batchNumber: string | null; unitCost: string } | null;
   size: string;
   label: string;
   count: number;
@@ -162,6 +169,8 @@ export interface EstimateMaterial {
   material: Named | null;
   unit: string;
   quantity: string;
+  /** costed from lots in stock; "0" on supplier prices */
+  stockQuantity: string;
   packs: EstimatePack[];
   packTotal: string | null;
   leftover: string | null;
@@ -181,6 +190,7 @@ export interface Estimate {
   note: string | null;
   buildUp: { id: string | null; name: string; labourRate: string; markupPct: string; vatRatePct: string };
   pricedOn: string;
+  costBasis: CostBasis;
   airC: string;
   catalystPercent: string;
   deckAreaM2: string;
@@ -215,6 +225,7 @@ export interface EstimateSummary {
   createdAt: string;
   createdBy: Named | null;
   buildUpName: string;
+  costBasis: CostBasis;
   laminatedAreaM2: string;
   net: string;
   gross: string;

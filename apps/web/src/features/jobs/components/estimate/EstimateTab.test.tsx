@@ -49,7 +49,13 @@ describe('the estimate tab', () => {
     await user.type(screen.getByLabelText('Air on the day (°C)'), '12');
     await user.click(screen.getByRole('button', { name: 'Run estimate' }));
     await waitFor(() => expect(posts).toHaveLength(1));
-    expect(posts[0]?.body).toEqual({ buildUpId: 'bu-1', airC: '12' });
+    // Supplier prices by default; the mat role keeps the material version 1 used.
+    expect(posts[0]?.body).toEqual({
+      buildUpId: 'bu-1',
+      airC: '12',
+      costBasis: 'supplier',
+      materials: [{ role: 'mat', materialId: 'mat-1' }],
+    });
 
     const view = await screen.findByRole('region', { name: 'Estimate version 2' });
     const mat = within(view).getAllByText('Chopped strand mat 450 g')[0]!.closest('tr')!;
@@ -122,6 +128,104 @@ describe('the estimate tab', () => {
     expect(screen.getByText('About 20–30 minutes before it gels.')).toBeInTheDocument();
     expect(screen.getByText('Corrosive to eyes.')).toBeInTheDocument();
   }, 30_000);
+
+  it('runs on stock cost with a material chosen for a role, and shows the basis and the lot rows', async () => {
+    const posts: MockRequest[] = [];
+    const onStock = estimate({
+      id: 'est-3',
+      version: 2,
+      costBasis: 'stock',
+      unpriced: 0,
+      problems: [],
+      materials: [
+        {
+          ...v2.materials[0]!,
+          material: { id: 'mat-2', name: 'Chopped strand mat 600 g' },
+          stockQuantity: '40',
+          packs: [
+            // invented: 40 m² of lot M-7 at £1.9375 = £77.50, then one 30 m² roll at £58.00
+            { source: 'stock', lot: { id: 'lot-7', batchNumber: 'M-7', unitCost: '1.9375' }, size: '40', label: 'From stock, lot M-7', count: 1, packPrice: '77.50', supplier: null, cost: '77.50' },
+            { source: 'supplier', lot: null, size: '30', label: '30 m² roll', count: 1, packPrice: '58.00', supplier: null, cost: '58.00' },
+          ],
+          cost: '135.50',
+        },
+      ],
+    });
+    let versions = [summary(v1)];
+    const kinds: string[] = [];
+    signedIn({
+      [`GET /api/jobs/${JOB_ID}/estimates`]: () => json(versions),
+      [`GET /api/jobs/${JOB_ID}/estimates/2`]: json(onStock),
+      'GET /api/materials': () => {
+        kinds.push('asked');
+        return json({
+          items: [
+            { id: 'mat-1', code: 'CSM-450', name: 'Chopped strand mat 450 g', kind: 'mat' },
+            { id: 'mat-2', code: 'CSM-600', name: 'Chopped strand mat 600 g', kind: 'mat' },
+          ],
+          total: 2,
+          page: 1,
+          pageSize: 100,
+        });
+      },
+      [`POST /api/jobs/${JOB_ID}/estimates`]: (request) => {
+        posts.push(request);
+        versions = [summary(v1), summary(onStock)];
+        return json(onStock, 201);
+      },
+    });
+    const { user } = renderWithProviders(<AppRoutes />, { route: `/jobs/${JOB_ID}?tab=estimate` });
+    expect(await screen.findByRole('heading', { name: 'Version 1' })).toBeInTheDocument();
+    await user.click(screen.getByRole('radio', { name: 'Stock the job can reserve' }));
+    expect(screen.getByText(/Lots this job could reserve for its date, at what they cost/)).toBeInTheDocument();
+    // The catalogue is asked only when the section is opened.
+    expect(kinds).toHaveLength(0);
+    await user.click(screen.getByRole('button', { name: /Materials for this run/ }));
+    const mat = await screen.findByRole('combobox', { name: 'Mat' });
+    await waitFor(() => expect(kinds).toHaveLength(1));
+    expect(mat).toHaveValue('Chopped strand mat 450 g (CSM-450)');
+    await user.click(mat);
+    await user.click(await screen.findByRole('option', { name: 'Chopped strand mat 600 g (CSM-600)' }));
+    expect(screen.getByText(/1 of 1 chosen, as version 1 with 1 changed/)).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Run estimate' }));
+    await waitFor(() => expect(posts).toHaveLength(1));
+    expect(posts[0]?.body).toEqual({
+      buildUpId: 'bu-1',
+      costBasis: 'stock',
+      materials: [{ role: 'mat', materialId: 'mat-2' }],
+    });
+    const view = await screen.findByRole('region', { name: 'Estimate version 2' });
+    expect(within(view).getByText('Stock cost')).toBeInTheDocument();
+    const row = within(view).getByText('Chopped strand mat 600 g').closest('tr')!;
+    expect(within(row).getByText('40 m² from stock (lot M-7) + 1 × 30 m² roll')).toBeInTheDocument();
+    expect(within(row).getByText('£1.9375 / m² (lot M-7), £58.00 / 30 m² roll')).toBeInTheDocument();
+    expect(within(row).getByText('£135.50')).toBeInTheDocument();
+    expect(screen.getAllByText('Stock cost').length).toBeGreaterThan(1); // the versions table says it too
+  }, 60_000);
+
+  it('leaves a role to best fit when asked, and offers stock cost only to a job with a date', async () => {
+    const posts: MockRequest[] = [];
+    signedIn({
+      [`GET /api/jobs/${JOB_ID}`]: json(jobDetail({ acceptedEstimate: { id: 'est-1', version: 1 }, scheduledOn: null })),
+      'GET /api/materials': json({ items: [], total: 0, page: 1, pageSize: 100 }),
+      [`POST /api/jobs/${JOB_ID}/estimates`]: (request) => {
+        posts.push(request);
+        return json(v2, 201);
+      },
+    });
+    const { user } = renderWithProviders(<AppRoutes />, { route: `/jobs/${JOB_ID}?tab=estimate` });
+    expect(await screen.findByRole('heading', { name: 'Version 1' })).toBeInTheDocument();
+    expect(screen.getByRole('radio', { name: 'Stock the job can reserve' })).toBeDisabled();
+    expect(screen.getByText(/Stock cost needs the job’s scheduled date/)).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: /Materials for this run/ }));
+    const mat = await screen.findByRole('combobox', { name: 'Mat' });
+    await user.click(mat);
+    await user.click(await screen.findByRole('option', { name: 'Best fit' }));
+    expect(screen.getByText(/best fit for every role/)).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Run estimate' }));
+    await waitFor(() => expect(posts).toHaveLength(1));
+    expect(posts[0]?.body).toEqual({ buildUpId: 'bu-1', costBasis: 'supplier' });
+  }, 60_000);
 
   it('asks for the roof before estimating a job that has none', async () => {
     signedIn({

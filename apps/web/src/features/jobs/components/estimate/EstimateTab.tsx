@@ -11,11 +11,14 @@ import { useDownloadQuote } from '../../api/download-quote';
 import { useBuildUps } from '../../api/get-build-ups';
 import { useEstimate } from '../../api/get-estimate';
 import { useEstimates } from '../../api/get-estimates';
-import type { EstimateSummary, JobDetail } from '../../api/types';
+import type { LineRole } from '@potlife/domain';
+import type { CostBasis, EstimateSummary, JobDetail } from '../../api/types';
 import { ESTIMATING_STATUSES, statusLabels } from '../../utils/labels';
 import { formatMoney } from '../../utils/format';
 import { EstimateView } from './EstimateView';
 import { LayingCheckCard } from './LayingCheckCard';
+import { chosenMaterials, RunOptions } from './RunOptions';
+import { runRoles } from './run-materials';
 import { VersionsTable } from './VersionsTable';
 
 const AIR = /^-?\d{1,2}(\.\d)?$/;
@@ -39,6 +42,9 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
   const [airError, setAirError] = useState<string | null>(null);
   const [note, setNote] = useState('');
   const [chosen, setChosen] = useState<number | null>(null);
+  const [costBasis, setCostBasis] = useState<CostBasis>('supplier');
+  /** the estimator's material choices for the next run, by role (else the last version's) */
+  const [overrides, setOverrides] = useState<Partial<Record<LineRole, string>>>({});
 
   const versions = estimates.data ?? [];
   const latest = versions.reduce<number | null>(
@@ -47,6 +53,7 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
   );
   const shown = chosen ?? job.acceptedEstimate?.version ?? latest;
   const estimate = useEstimate(job.id, shown);
+  const last = useEstimate(job.id, latest);
   const open = ESTIMATING_STATUSES.includes(job.status);
 
   const run = () => {
@@ -56,20 +63,25 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
       return;
     }
     setAirError(null);
+    const materials = chosenMaterials(runRoles(last.data), overrides);
     create.mutate(
       {
         ...(buildUpId ? { buildUpId } : {}),
         ...(air !== '' ? { airC: air } : {}),
         ...(note.trim() !== '' ? { note: note.trim() } : {}),
+        costBasis,
+        ...(materials.length > 0 ? { materials } : {}),
       },
       {
         onSuccess: (made) => {
           setChosen(made.version);
           setNote('');
+          // the new version is now the starting point of the next run
+          setOverrides({});
           notifications.show({
             color: 'green',
             title: `Version ${made.version} made`,
-            message: `${formatMoney(made.price.gross)} including VAT${made.unpriced > 0 ? `; ${made.unpriced} without a price` : ''}.`,
+            message: `${formatMoney(made.price.gross)} including VAT, ${made.costBasis === 'stock' ? 'on stock cost' : 'at supplier prices'}${made.unpriced > 0 ? `; ${made.unpriced} without a price` : ''}.`,
           });
         },
       },
@@ -180,10 +192,21 @@ export function EstimateTab({ job, onGoToRoof, roofUnsaved = false }: EstimateTa
                     onChange={(e) => setNote(e.currentTarget.value)}
                     w={{ base: '100%', sm: 220 }}
                   />
+                </Group>
+                <RunOptions
+                  hasDate={job.scheduledOn !== null}
+                  costBasis={costBasis}
+                  onCostBasis={setCostBasis}
+                  last={last.data}
+                  lastLoading={latest !== null && last.isPending}
+                  overrides={overrides}
+                  onChoose={(role, value) => setOverrides((o) => ({ ...o, [role]: value }))}
+                />
+                <Group justify="flex-end">
                   <Button
                     leftSection={<IconCalculator size={18} />}
                     loading={create.isPending}
-                    disabled={!buildUpId}
+                    disabled={!buildUpId || (latest !== null && last.isPending)}
                     onClick={run}
                   >
                     Run estimate

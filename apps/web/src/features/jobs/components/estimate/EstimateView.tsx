@@ -15,24 +15,40 @@ import { IconAlertTriangle } from '@tabler/icons-react';
 import { DataTable, type DataTableSortStatus } from 'mantine-datatable';
 import { useMemo, useState } from 'react';
 import { compareValues, formatDate, formatDateTime } from '../../../../lib/format';
-import type { Estimate, EstimateMaterial } from '../../api/types';
-import { formatArea, formatMoney, formatNumber, formatQuantity } from '../../utils/format';
+import type { Estimate, EstimateMaterial, EstimatePack } from '../../api/types';
+import { formatArea, formatMoney, formatNumber, formatQuantity, unitLabel } from '../../utils/format';
 import { CautionsList } from './CautionsList';
 
-function packsText(m: EstimateMaterial): string {
+const lotName = (p: EstimatePack) => `lot ${p.lot?.batchNumber ?? p.lot?.id.slice(0, 8) ?? ''}`;
+
+/** "6 kg from stock (lot R-A) + 2 × 25 kg drum" */
+export function packsText(m: EstimateMaterial): string {
   if (m.packs.length === 0) {
     return '—';
   }
-  return m.packs.map((p) => `${p.count} × ${p.label}`).join(' + ');
+  return m.packs
+    .map((p) =>
+      p.source === 'stock' ? `${formatQuantity(p.size, m.unit, 3)} from stock (${lotName(p)})` : `${p.count} × ${p.label}`,
+    )
+    .join(' + ');
 }
 
-function packPriceText(m: EstimateMaterial): string {
-  const priced = m.packs.filter((p) => p.packPrice !== null);
+/** "£3.1234 / kg (lot R-A), £87.25 / 25 kg drum": a lot at its own cost, packs at the supplier's price. */
+export function packPriceText(m: EstimateMaterial): string {
+  const priced = m.packs.filter((p) => (p.source === 'stock' ? p.lot !== null : p.packPrice !== null));
   if (priced.length === 0) {
     return '—';
   }
-  return priced.map((p) => `${formatMoney(p.packPrice)} / ${p.label}`).join(', ');
+  return priced
+    .map((p) =>
+      p.source === 'stock'
+        ? `£${formatNumber(p.lot!.unitCost, 4)} / ${unitLabel(m.unit) || 'each'} (${lotName(p)})`
+        : `${formatMoney(p.packPrice)} / ${p.label}`,
+    )
+    .join(', ');
 }
+
+export const costBasisLabels = { supplier: 'Supplier prices', stock: 'Stock cost' } as const;
 
 const PAGE_SIZE = 25;
 
@@ -74,6 +90,9 @@ export function EstimateView({ estimate }: { estimate: Estimate }) {
               Version {estimate.version}
             </Title>
             {estimate.accepted ? <Badge color="green">Accepted</Badge> : null}
+            <Badge color={estimate.costBasis === 'stock' ? 'teal' : 'gray'} variant="light">
+              {costBasisLabels[estimate.costBasis]}
+            </Badge>
           </Group>
           <Text size="sm" c="dimmed">
             {estimate.buildUp.name} · priced on {formatDate(estimate.pricedOn)} · made{' '}
@@ -87,6 +106,12 @@ export function EstimateView({ estimate }: { estimate: Estimate }) {
         </Text>
       </Group>
       {estimate.note ? <Text size="sm">Note: {estimate.note}</Text> : null}
+      {estimate.costBasis === 'stock' ? (
+        <Text size="sm" c="dimmed">
+          Costed on stock: what the job could reserve for its date at the lots&apos; own cost, the rest at
+          supplier prices. The quote shows only the price.
+        </Text>
+      ) : null}
 
       {estimate.unpriced > 0 ? (
         <Alert

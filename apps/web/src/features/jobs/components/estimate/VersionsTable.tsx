@@ -90,6 +90,11 @@ export function VersionsTable({
         { accessor: 'createdAt', title: 'Made', sortable: true, render: (v) => formatDateTime(v.createdAt) },
         { accessor: 'buildUpName', title: 'Build-up', sortable: true },
         {
+          accessor: 'costBasis',
+          title: 'Costed at',
+          render: (v) => (v.costBasis === 'stock' ? 'Stock cost' : 'Supplier prices'),
+        },
+        {
           accessor: 'laminatedAreaM2',
           title: 'Laminated',
           textAlign: 'right',
