@@ -6,6 +6,7 @@ export const customersKeys = {
   lists: () => [...customersKeys.all, 'list'] as const,
   list: (query: CustomerListQuery) => [...customersKeys.lists(), query] as const,
   detail: (id: string) => [...customersKeys.all, 'detail', id] as const,
+  /** A customer's jobs sit with the jobs lists (['jobs', 'list', …]), so any change to a job refreshes them. */
   jobs: (id: string, query: { sort: string; page: number; pageSize: number }) =>
-    [...customersKeys.detail(id), 'jobs', query] as const,
+    ['jobs', 'list', { customerId: id, ...query }] as const,
 };

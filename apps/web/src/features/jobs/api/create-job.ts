@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPost } from '../../../lib/api-client';
-import { jobsKeys } from './keys';
+import { customersKeys, jobsKeys } from './keys';
 import type { JobDetail, Substrate } from './types';
 
 export interface CreateJobBody {
@@ -25,6 +25,11 @@ export function useCreateJob() {
   return useMutation({
     mutationFn: createJob,
     meta: { errorTitle: 'The job was not created' },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobsKeys.all }),
+    // A customer's count of jobs changes too.
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: jobsKeys.all }),
+        queryClient.invalidateQueries({ queryKey: customersKeys.all }),
+      ]),
   });
 }

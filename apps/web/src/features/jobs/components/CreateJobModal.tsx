@@ -285,7 +285,6 @@ export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalPro
               <Select
                 label="Estimator"
                 placeholder={estimators.isPending ? 'Loading people…' : 'Nobody yet'}
-                description="Who measures and prices it"
                 data={(estimators.data ?? []).map((p) => ({
                   value: p.id,
                   label: p.id === me.id ? `${p.name} (me)` : p.name,

@@ -103,7 +103,20 @@ export function JobsTable({
             </Stack>
           ),
         },
-        { accessor: 'customer', title: 'Customer', sortable: true, render: (job) => job.customer.name },
+        {
+          accessor: 'customer',
+          title: 'Customer',
+          sortable: true,
+          // The estimator rides under the customer: one column fewer, so the status stays whole.
+          render: (job) => (
+            <Stack gap={0}>
+              <Text size="sm">{job.customer.name}</Text>
+              <Text size="xs" c="dimmed">
+                {job.estimator ? `Estimator: ${job.estimator.name}` : 'No estimator yet'}
+              </Text>
+            </Stack>
+          ),
+        },
         {
           accessor: 'status',
           title: 'Status',
@@ -136,18 +149,6 @@ export function JobsTable({
             ) : (
               <Text size="sm" c="dimmed">
                 Not accepted
-              </Text>
-            ),
-        },
-        {
-          accessor: 'estimator',
-          title: 'Estimator',
-          render: (job) =>
-            job.estimator ? (
-              job.estimator.name
-            ) : (
-              <Text size="sm" c="dimmed">
-                Nobody yet
               </Text>
             ),
         },

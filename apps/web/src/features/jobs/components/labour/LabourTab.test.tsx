@@ -199,7 +199,7 @@ describe('the job’s estimator', () => {
     const { user } = renderWithProviders(<AppRoutes />, { route: '/jobs' });
     // The jobs table names each job's estimator.
     const row = (await screen.findByText('J-0012 · Rear extension flat roof')).closest('tr')!;
-    expect(within(row).getByText('Ravi Okafor')).toBeInTheDocument();
+    expect(within(row).getByText('Estimator: Ravi Okafor')).toBeInTheDocument();
 
     await user.click(screen.getByRole('button', { name: 'New job' }));
     const dialog = await screen.findByRole('dialog', { name: 'New job' });
