@@ -33,6 +33,12 @@ export function packsText(m: EstimateMaterial): string {
     .join(' + ');
 }
 
+/** A lot's cost of one unit: to the penny, or to its 4 places when it has them ("£13.40", "£3.1234"). */
+function unitCostText(v: string): string {
+  const places = (v.split('.')[1] ?? '').replace(/0+$/, '').length;
+  return places <= 2 ? formatMoney(v) : `£${formatNumber(v, 4)}`;
+}
+
 /** "£3.1234 / kg (lot R-A), £87.25 / 25 kg drum": a lot at its own cost, packs at the supplier's price. */
 export function packPriceText(m: EstimateMaterial): string {
   const priced = m.packs.filter((p) => (p.source === 'stock' ? p.lot !== null : p.packPrice !== null));
@@ -42,7 +48,7 @@ export function packPriceText(m: EstimateMaterial): string {
   return priced
     .map((p) =>
       p.source === 'stock'
-        ? `£${formatNumber(p.lot!.unitCost, 4)} / ${unitLabel(m.unit) || 'each'} (${lotName(p)})`
+        ? `${unitCostText(p.lot!.unitCost)} / ${unitLabel(m.unit) || 'each'} (${lotName(p)})`
         : `${formatMoney(p.packPrice)} / ${p.label}`,
     )
     .join(', ');
