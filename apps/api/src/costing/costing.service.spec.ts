@@ -125,4 +125,41 @@ describe('CostingService.matchMaterials', () => {
     expect(problems.get('mat')).toContain('not an active mat');
     expect(new Decimal(takeoff.deckAreaM2).toString()).toBe('12'); // 4 × 3 (arithmetic)
   });
+
+  it('on stock cost takes what the lots cover at their cost and buys only the rest (costFromStock)', async () => {
+    const suppliers = { currentPrices: jest.fn().mockResolvedValue([]) };
+    const withStock = new CostingService(repo as never, suppliers as never);
+    const offer = jest.fn().mockResolvedValue({
+      useBy: '2027-01-10',
+      lots: new Map([
+        // invented: 5 drip lengths in stock at £9.50; a flagged lot of corner pieces is not offered
+        ['TRM-DRIP', [{ id: 'lot-d', quantity: '5', expiresOn: '9999-12-31', usable: true, unitCost: '9.5', batchNumber: 'D-1' }]],
+        ['CRN-EXT', [{ id: 'lot-c', quantity: '10', expiresOn: '9999-12-31', usable: false, unitCost: '1', batchNumber: 'C-1' }]],
+      ]),
+    });
+    const costed = await withStock.costTakeoff(
+      'c',
+      takeoff,
+      ctx,
+      { labourRate: '0', markupPct: '0', vatRatePct: '20' },
+      '2026-12-01',
+      undefined,
+      undefined,
+      offer,
+    );
+    const drip = costed.materials.find((g) => g.material?.code === 'TRM-DRIP')!;
+    // Drip runs of 4 m and 3 m in 3 m lengths lapped 50 mm: 2 + 1 = 3 lengths (domain trimLengthsForRun),
+    // all from lot D-1: 3 × £9.50 = £28.50, nothing bought.
+    expect(drip.stockQuantity.toString()).toBe('3');
+    expect(drip.packs.map((p) => [p.source, p.size.toString(), p.cost?.toString()])).toEqual([['stock', '3', '28.5']]);
+    expect(drip.cost?.toString()).toBe('28.5');
+    // The corner pieces' only lot is unusable: both are bought, and no supplier price is known.
+    const corner = costed.materials.find((g) => g.material?.code === 'CRN-EXT')!;
+    expect(corner.stockQuantity.toString()).toBe('0');
+    expect(corner.packs.map((p) => [p.source, p.count])).toEqual([['supplier', 2]]);
+    expect(corner.problem).toContain('No price');
+    // priceEstimate over the priced stock rows only (labour 0, markup 0): £28.50.
+    expect(costed.price.materialCost.toString()).toBe('28.5');
+    expect(offer).toHaveBeenCalledWith(expect.arrayContaining(['TRM-DRIP', 'CRN-EXT']));
+  });
 });
