@@ -28,6 +28,27 @@ export type LineRole =
   | 'battens'
   | 'nails';
 
+/** The material kind each line role is costed as: the catalogue kind its material must be. */
+export const LINE_ROLE_KINDS: Readonly<Record<LineRole, MaterialKind>> = Object.freeze({
+  mat: 'mat',
+  'base-resin': 'base-resin',
+  'bandage-resin': 'base-resin',
+  topcoat: 'topcoat',
+  catalyst: 'catalyst',
+  'trim:drip': 'trim',
+  'trim:kerb': 'trim',
+  'trim:wall': 'trim',
+  'trim:angle': 'trim',
+  'corner:external': 'trim',
+  'corner:internal': 'trim',
+  outlet: 'outlet',
+  bandage: 'bandage',
+  acetone: 'acetone',
+  adhesive: 'adhesive',
+  battens: 'batten',
+  nails: 'fixing',
+});
+
 /** One line of a take-off. Trim lines also give the number of `lengths` and the `metres` of edge they cover. */
 export interface EstimateLine {
   role: LineRole;
@@ -267,42 +288,37 @@ export function estimateRoof(roof: Roof, buildUp: BuildUpInput = {}): Estimate {
   const adhesive = trimM.div(b.adhesiveTrimMPerCartridge).ceil();
 
   const lines: EstimateLine[] = [];
-  const add = (line: EstimateLine): void => {
+  const add = (line: Omit<EstimateLine, 'material'>): void => {
     if (!line.quantity.isZero()) {
-      lines.push(line);
+      lines.push({ ...line, material: LINE_ROLE_KINDS[line.role] });
     }
   };
   add({
     role: 'mat',
-    material: 'mat',
     unit: 'm2',
     quantity: mat,
     description: `${b.matGsm.toString()} g/m² chopped strand mat, ${b.layers.toString()} layer(s), ${b.rollWidthM.toString()} m rolls lapped ${b.lapM.times(MM_PER_M).toString()} mm, ${b.matWastagePct.toString()} % wastage`,
   });
   add({
     role: 'base-resin',
-    material: 'base-resin',
     unit: 'kg',
     quantity: baseResin,
     description: `Base resin at ${b.resinToGlass.toString()}:1 resin to glass, ${b.resinWastagePct.toString()} % wastage`,
   });
   add({
     role: 'bandage-resin',
-    material: 'base-resin',
     unit: 'kg',
     quantity: bandageResin,
     description: `Base resin for bandage and for dressing pipes and outlets, ${b.resinWastagePct.toString()} % wastage`,
   });
   add({
     role: 'topcoat',
-    material: 'topcoat',
     unit: 'kg',
     quantity: topcoat,
     description: `Topcoat at ${b.topcoatKgPerM2.toString()} kg/m² over ${show(laminatedAreaM2)} m²`,
   });
   add({
     role: 'catalyst',
-    material: 'catalyst',
     unit: 'kg',
     quantity: catalyst,
     description: `Catalyst at ${pct.toString()} % of resin and topcoat for ${airC.toString()} °C air`,
@@ -311,7 +327,6 @@ export function estimateRoof(roof: Roof, buildUp: BuildUpInput = {}): Estimate {
     const t = trims.get(kind) as { lengths: number; metres: Decimal };
     add({
       role: `trim:${kind}`,
-      material: 'trim',
       unit: 'each',
       quantity: new Decimal(t.lengths),
       lengths: t.lengths,
@@ -319,32 +334,29 @@ export function estimateRoof(roof: Roof, buildUp: BuildUpInput = {}): Estimate {
       description: `${edgeKindLabel(kind)}: ${t.lengths} × ${b.trimLengthM.toString()} m lengths for ${show(t.metres)} m of edge`,
     });
   }
-  add({ role: 'corner:external', material: 'trim', unit: 'each', quantity: new Decimal(corners.external), description: 'External corner pieces' });
-  add({ role: 'corner:internal', material: 'trim', unit: 'each', quantity: new Decimal(corners.internal), description: 'Internal corner pieces' });
-  add({ role: 'outlet', material: 'outlet', unit: 'each', quantity: new Decimal(outlets), description: 'Outlet pieces' });
+  add({ role: 'corner:external', unit: 'each', quantity: new Decimal(corners.external), description: 'External corner pieces' });
+  add({ role: 'corner:internal', unit: 'each', quantity: new Decimal(corners.internal), description: 'Internal corner pieces' });
+  add({ role: 'outlet', unit: 'each', quantity: new Decimal(outlets), description: 'Outlet pieces' });
   add({
     role: 'bandage',
-    material: 'bandage',
     unit: 'm',
     quantity: bandageM,
     description: `${b.bandageWidthMm.toString()} mm bandage over trim junctions and joints, corners, pipes and outlets`,
   });
   add({
     role: 'acetone',
-    material: 'acetone',
     unit: 'L',
     quantity: laminatedAreaM2.times(b.acetoneLPerM2),
     description: 'Acetone for cleaning rollers and tools',
   });
   add({
     role: 'adhesive',
-    material: 'adhesive',
     unit: 'each',
     quantity: adhesive,
     description: `Trim adhesive, cartridges of one per ${b.adhesiveTrimMPerCartridge.toString()} m of trim`,
   });
-  add({ role: 'battens', material: 'batten', unit: 'm', quantity: battenM, description: 'Timber battens under the trims' });
-  add({ role: 'nails', material: 'fixing', unit: 'each', quantity: nails.ceil(), description: 'Clout nails for the trims' });
+  add({ role: 'battens', unit: 'm', quantity: battenM, description: 'Timber battens under the trims' });
+  add({ role: 'nails', unit: 'each', quantity: nails.ceil(), description: 'Clout nails for the trims' });
 
   const laminatingHours = laminatedAreaM2.times(b.labourHoursPerM2);
   const trimHours = trimM.times(b.labourHoursPerTrimM);

@@ -97,7 +97,7 @@ export type { EdgeKind, Roof, RoofArea, RectangleArea, PolygonArea, RoofEdge } f
 export { DEFAULT_BUILD_UP, resolveBuildUp } from './build-up';
 export type { BuildUp, BuildUpInput, ResolvedBuildUp, PackedMaterial, PackSizes } from './build-up';
 
-export { estimateRoof, deriveCorners, DEFAULT_ESTIMATE_AIR_C } from './estimate';
+export { estimateRoof, deriveCorners, DEFAULT_ESTIMATE_AIR_C, LINE_ROLE_KINDS } from './estimate';
 export type { Estimate, EstimateLine, EstimateArea, LineRole, Unit } from './estimate';
 
 export { priceEstimate, packsForEstimate } from './price';

@@ -7,6 +7,7 @@ import {
   Decimal,
   Estimate as Takeoff,
   EstimateLine as TakeoffLine,
+  LINE_ROLE_KINDS,
   LineRole,
   MaterialKind,
   Numeric,
@@ -100,21 +101,19 @@ const pieceOf = (m: Material): TrimPiece => m.trimPiece ?? 'length';
  * How each take-off role finds its catalogue material: by kind and the kind's own fields. A role
  * with several candidates takes the best fit, then the lowest code.
  */
-function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } {
+function matchFor(role: LineRole): { fit: Fit; need: string } {
   switch (role) {
     case 'mat':
       return {
-        kind: 'mat',
         fit: (m, _l, c) =>
           sameNumber(m.matGsm, c.matGsm) ? (sameNumber(m.rollWidthM, c.rollWidthM) ? 0 : 1) : null,
         need: 'a mat of the build-up’s weight',
       };
     case 'base-resin':
     case 'bandage-resin':
-      return { kind: 'base-resin', fit: () => 0, need: 'a base resin' };
+      return { fit: () => 0, need: 'a base resin' };
     case 'topcoat':
       return {
-        kind: 'topcoat',
         fit: (m, _l, c) =>
           c.topcoatColour === null
             ? 0
@@ -124,14 +123,13 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
         need: 'a topcoat of the job’s colour',
       };
     case 'catalyst':
-      return { kind: 'catalyst', fit: () => 0, need: 'a catalyst' };
+      return { fit: () => 0, need: 'a catalyst' };
     case 'trim:drip':
     case 'trim:kerb':
     case 'trim:wall':
     case 'trim:angle': {
       const edge = role.slice(5);
       return {
-        kind: 'trim',
         fit: (m, _l, c) =>
           m.trimKind === edge && pieceOf(m) === 'length'
             ? sameNumber(m.trimLengthM, c.trimLengthM)
@@ -145,32 +143,35 @@ function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } 
     case 'corner:internal': {
       const which = role === 'corner:external' ? 'external' : 'internal';
       return {
-        kind: 'trim',
         fit: (m) => (pieceOf(m) === `${which}-corner` ? 0 : null),
         need: `an ${which} corner piece (a trim whose piece is “${which} corner”)`,
       };
     }
     case 'outlet':
-      return { kind: 'outlet', fit: () => 0, need: 'an outlet piece' };
+      return { fit: () => 0, need: 'an outlet piece' };
     case 'bandage':
       return {
-        kind: 'bandage',
         fit: (m, _l, c) => (sameNumber(m.rollWidthM, new Decimal(c.bandageWidthMm).div(1000)) ? 0 : 1),
         need: 'a bandage',
       };
     case 'acetone':
-      return { kind: 'acetone', fit: () => 0, need: 'acetone' };
+      return { fit: () => 0, need: 'acetone' };
     case 'adhesive':
-      return { kind: 'adhesive', fit: () => 0, need: 'a trim adhesive' };
+      return { fit: () => 0, need: 'a trim adhesive' };
     case 'battens':
-      return { kind: 'batten', fit: () => 0, need: 'a batten' };
+      return { fit: () => 0, need: 'a batten' };
     case 'nails':
-      return { kind: 'fixing', fit: () => 0, need: 'a fixing (clout nails)' };
+      return { fit: () => 0, need: 'a fixing (clout nails)' };
     default: {
       const never: never = role;
       throw new Error(`unknown line role ${String(never)}`);
     }
   }
+}
+
+/** How a role finds its material: of the role's kind (the domain's LINE_ROLE_KINDS), by the best fit. */
+function fitFor(role: LineRole): { kind: MaterialKind; fit: Fit; need: string } {
+  return { kind: LINE_ROLE_KINDS[role], ...matchFor(role) };
 }
 
 @Injectable()

@@ -100,7 +100,14 @@ export interface BuildUpChoice {
 }
 
 // The roof as the API stores it, and its summary: one definition in the domain for both sides.
-export type { StoredFall, StoredArea, StoredEdge, StoredRoof, FallResult, RoofSummary } from '@potlife/domain';
+export type {
+  StoredFall,
+  StoredArea,
+  StoredEdge,
+  StoredRoof,
+  FallResult,
+  RoofSummary,
+} from '@potlife/domain';
 
 export interface RoofRecord {
   jobId: string;

@@ -2,7 +2,8 @@ import type { LineRole, MaterialKind } from '@potlife/domain';
 import { Accordion, Alert, Button, Group, Radio, Select, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useMemo, useState } from 'react';
 import type { CostBasis, Estimate } from '../../api/types';
-import { roleLabels, runRoles, useRunMaterials, type RunRole } from './run-materials';
+import { useRunMaterials } from '../../api/get-run-materials';
+import { roleLabels, runRoles, type RunRole } from './run-materials';
 
 /** The Select value that leaves a role to the costing engine's best fit. */
 export const BEST_FIT = 'best-fit';
@@ -54,7 +55,9 @@ export function RunOptions({
   const kinds = useMemo(() => [...new Set(roles.map((r) => r.kind))] as MaterialKind[], [roles]);
   const catalogue = useRunMaterials(kinds, opened === 'materials');
   const chosen = chosenMaterials(roles, overrides).length;
-  const changed = roles.filter((r) => overrides[r.role] !== undefined && overrides[r.role] !== (r.used?.id ?? BEST_FIT)).length;
+  const changed = roles.filter(
+    (r) => overrides[r.role] !== undefined && overrides[r.role] !== (r.used?.id ?? BEST_FIT),
+  ).length;
   const summary = lastLoading
     ? 'loading the last version…'
     : chosen === 0
@@ -100,7 +103,12 @@ export function RunOptions({
                 <Alert color="red" variant="light" title="The catalogue could not be loaded">
                   <Group gap="sm">
                     <Text size="sm">The choices below show only what the last version used.</Text>
-                    <Button size="xs" variant="white" onClick={() => void catalogue.refetch()} loading={catalogue.isFetching}>
+                    <Button
+                      size="xs"
+                      variant="white"
+                      onClick={() => void catalogue.refetch()}
+                      loading={catalogue.isFetching}
+                    >
                       Try again
                     </Button>
                   </Group>
@@ -115,7 +123,9 @@ export function RunOptions({
                     // until the catalogue arrives, or a material no longer active
                     options.unshift({
                       value: r.used.id,
-                      label: catalogue.isSuccess ? `${r.used.name} (no longer active: best fit is used)` : r.used.name,
+                      label: catalogue.isSuccess
+                        ? `${r.used.name} (no longer active: best fit is used)`
+                        : r.used.name,
                     });
                   }
                   return (
