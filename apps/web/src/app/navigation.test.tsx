@@ -25,7 +25,7 @@ async function navLabels(): Promise<string[]> {
 }
 
 // The store's screens (Receive, Stock, Counts, Temperatures), the estimator's (Jobs, Calendar,
-// Build-ups), the catalogue and suppliers, and the owner's (Users, Mail outbox).
+// Customers, Build-ups), the catalogue and suppliers, and the owner's (Users, Mail outbox).
 const OWNER_NAV = [
   'Home',
   'Receive',
@@ -34,13 +34,23 @@ const OWNER_NAV = [
   'Temperatures',
   'Jobs',
   'Calendar',
+  'Customers',
   'Build-ups',
   'Catalogue',
   'Suppliers',
   'Users',
   'Mail outbox',
 ];
-const ESTIMATOR_NAV = ['Home', 'Stock', 'Jobs', 'Calendar', 'Build-ups', 'Catalogue', 'Suppliers'];
+const ESTIMATOR_NAV = [
+  'Home',
+  'Stock',
+  'Jobs',
+  'Calendar',
+  'Customers',
+  'Build-ups',
+  'Catalogue',
+  'Suppliers',
+];
 const STOREMAN_NAV = [
   'Home',
   'Receive',
