@@ -9,7 +9,11 @@ interface JobsQuery {
   pageSize: number;
 }
 
-export function getCustomerJobs(customerId: string, query: JobsQuery, signal?: AbortSignal): Promise<Page<CustomerJob>> {
+export function getCustomerJobs(
+  customerId: string,
+  query: JobsQuery,
+  signal?: AbortSignal,
+): Promise<Page<CustomerJob>> {
   const params = new URLSearchParams({
     customerId,
     sort: query.sort,

@@ -1,8 +1,9 @@
+import { customersKey } from '../../../lib/customers';
 import type { CustomerListQuery } from './types';
 
 // Under ['customers'], the prefix the jobs screens also refresh when they add a customer.
 export const customersKeys = {
-  all: ['customers'] as const,
+  all: customersKey,
   lists: () => [...customersKeys.all, 'list'] as const,
   list: (query: CustomerListQuery) => [...customersKeys.lists(), query] as const,
   detail: (id: string) => [...customersKeys.all, 'detail', id] as const,

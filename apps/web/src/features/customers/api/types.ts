@@ -3,33 +3,13 @@ import type { JobStatus } from '@potlife/domain';
 // The shapes the customers API answers with (apps/api/src/customers/dto), and the jobs list's
 // rows as a customer's page shows them. Amounts are decimal strings, formatted for display only.
 
-export interface Customer {
-  id: string;
-  name: string;
-  contactName: string | null;
-  email: string | null;
-  phone: string | null;
-  billingAddress: string | null;
-  notes: string | null;
-  jobCount: number;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { Customer, CustomerBody } from '../../../lib/customers';
 
 export interface Page<T> {
   items: T[];
   total: number;
   page: number;
   pageSize: number;
-}
-
-export interface CustomerBody {
-  name: string;
-  contactName: string | null;
-  email: string | null;
-  phone: string | null;
-  billingAddress: string | null;
-  notes: string | null;
 }
 
 /** A job of the customer, as GET /api/jobs?customerId= lists it. */

@@ -4,7 +4,7 @@ import { notifications } from '@mantine/notifications';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { useEffect } from 'react';
 import { z } from 'zod';
-import { useCreateCustomer } from '../api/create-customer';
+import { useCreateCustomer } from '../../../lib/customers';
 import { useUpdateCustomer } from '../api/update-customer';
 import type { Customer, CustomerBody } from '../api/types';
 
@@ -17,7 +17,10 @@ export const customerSchema = z.object({
     .string()
     .trim()
     .max(320, 'Keep it to 320 characters')
-    .refine((v) => v === '' || z.email().safeParse(v).success, 'Enter a whole e-mail address, like name@example.com'),
+    .refine(
+      (v) => v === '' || z.email().safeParse(v).success,
+      'Enter a whole e-mail address, like name@example.com',
+    ),
   phone: text(40),
   billingAddress: text(500),
   notes: text(2000),
@@ -25,7 +28,14 @@ export const customerSchema = z.object({
 
 type CustomerValues = z.infer<typeof customerSchema>;
 
-const blank: CustomerValues = { name: '', contactName: '', email: '', phone: '', billingAddress: '', notes: '' };
+const blank: CustomerValues = {
+  name: '',
+  contactName: '',
+  email: '',
+  phone: '',
+  billingAddress: '',
+  notes: '',
+};
 
 function valuesOf(c: Customer | null): CustomerValues {
   return c
@@ -80,7 +90,10 @@ export function CustomerFormModal({ opened, onClose, customer, onSaved }: Custom
       notes: orNull(values.notes),
     };
     const done = (saved: Customer) => {
-      notifications.show({ color: 'green', message: customer ? `${saved.name} saved.` : `${saved.name} added.` });
+      notifications.show({
+        color: 'green',
+        message: customer ? `${saved.name} saved.` : `${saved.name} added.`,
+      });
       onClose();
       onSaved?.(saved);
     };
@@ -96,13 +109,24 @@ export function CustomerFormModal({ opened, onClose, customer, onSaved }: Custom
     <Modal opened={opened} onClose={onClose} title={title} size="lg">
       <form onSubmit={submit} noValidate aria-label={title}>
         <Stack gap="sm">
-          <TextInput label="Name" placeholder="A person or a firm" data-autofocus {...form.getInputProps('name')} />
+          <TextInput
+            label="Name"
+            placeholder="A person or a firm"
+            data-autofocus
+            {...form.getInputProps('name')}
+          />
           <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="sm">
             <TextInput label="Contact" {...form.getInputProps('contactName')} />
             <TextInput label="E-mail" type="email" inputMode="email" {...form.getInputProps('email')} />
             <TextInput label="Phone" type="tel" {...form.getInputProps('phone')} />
           </SimpleGrid>
-          <Textarea label="Billing address" rows={2} autosize maxRows={5} {...form.getInputProps('billingAddress')} />
+          <Textarea
+            label="Billing address"
+            rows={2}
+            autosize
+            maxRows={5}
+            {...form.getInputProps('billingAddress')}
+          />
           <Textarea label="Notes" rows={2} autosize maxRows={6} {...form.getInputProps('notes')} />
           <Group justify="flex-end" gap="sm">
             <Button variant="default" onClick={onClose} disabled={busy}>

@@ -71,7 +71,13 @@ export function CustomersTable(props: CustomersTableProps) {
           sortable: true,
           render: (c) => (
             <Stack gap={0}>
-              <Anchor component={Link} to={hrefs.customer(c.id)} fw={700} size="sm" onClick={(e) => e.stopPropagation()}>
+              <Anchor
+                component={Link}
+                to={hrefs.customer(c.id)}
+                fw={700}
+                size="sm"
+                onClick={(e) => e.stopPropagation()}
+              >
                 {c.name}
               </Anchor>
               {c.billingAddress ? (

@@ -1,4 +1,15 @@
-import { Anchor, Badge, Breadcrumbs, Button, Group, Paper, SimpleGrid, Stack, Text, Title } from '@mantine/core';
+import {
+  Anchor,
+  Badge,
+  Breadcrumbs,
+  Button,
+  Group,
+  Paper,
+  SimpleGrid,
+  Stack,
+  Text,
+  Title,
+} from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconPencil } from '@tabler/icons-react';
 import { DataTable, type DataTableSortStatus } from 'mantine-datatable';
@@ -14,7 +25,7 @@ import { useCustomer } from '../api/get-customer';
 import { useCustomerJobs } from '../api/get-customer-jobs';
 import type { CustomerJob } from '../api/types';
 import { CustomerFormModal } from '../components/CustomerFormModal';
-import { statusColors, statusLabels } from '../utils/status';
+import { statusColors, statusLabels } from '../../../lib/job-status';
 
 const JOB_SORTS: Record<string, { asc: string; desc: string }> = {
   reference: { asc: 'number', desc: '-number' },
@@ -163,7 +174,13 @@ export function CustomerRoute() {
                 sortable: true,
                 render: (j) => (
                   <Stack gap={0}>
-                    <Anchor component={Link} to={hrefs.job(j.id)} fw={700} size="sm" onClick={(e) => e.stopPropagation()}>
+                    <Anchor
+                      component={Link}
+                      to={hrefs.job(j.id)}
+                      fw={700}
+                      size="sm"
+                      onClick={(e) => e.stopPropagation()}
+                    >
                       {j.reference} · {j.title}
                     </Anchor>
                     <Text size="xs" c="dimmed" lineClamp={1}>
@@ -177,7 +194,10 @@ export function CustomerRoute() {
                 title: 'Status',
                 noWrap: true,
                 render: (j) => (
-                  <Badge color={statusColors[j.status]} variant={j.status === 'lost' || j.status === 'cancelled' ? 'outline' : 'light'}>
+                  <Badge
+                    color={statusColors[j.status]}
+                    variant={j.status === 'lost' || j.status === 'cancelled' ? 'outline' : 'light'}
+                  >
                     {statusLabels[j.status]}
                   </Badge>
                 ),
@@ -187,7 +207,14 @@ export function CustomerRoute() {
                 title: 'Date',
                 sortable: true,
                 noWrap: true,
-                render: (j) => (j.scheduledOn ? formatDate(j.scheduledOn) : <Text size="sm" c="dimmed">Not set</Text>),
+                render: (j) =>
+                  j.scheduledOn ? (
+                    formatDate(j.scheduledOn)
+                  ) : (
+                    <Text size="sm" c="dimmed">
+                      Not set
+                    </Text>
+                  ),
               },
               {
                 accessor: 'estimator',
@@ -200,7 +227,14 @@ export function CustomerRoute() {
                 title: 'Value (net)',
                 sortable: true,
                 textAlign: 'right',
-                render: (j) => (j.value ? formatMoney(j.value) : <Text size="sm" c="dimmed">Not accepted</Text>),
+                render: (j) =>
+                  j.value ? (
+                    formatMoney(j.value)
+                  ) : (
+                    <Text size="sm" c="dimmed">
+                      Not accepted
+                    </Text>
+                  ),
               },
             ]}
           />

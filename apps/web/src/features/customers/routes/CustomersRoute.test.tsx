@@ -17,14 +17,25 @@ describe('the customers screen', () => {
     setAccessToken('token');
     const { fetchMock } = mockApi({
       'GET /api/auth/me': json(sessionUser('estimator')),
-      'GET /api/customers': page([customer(), customer({ id: 'cust-2', name: 'Oriel Mews Lettings', contactName: null, phone: null, email: null, jobCount: 0 })]),
+      'GET /api/customers': page([
+        customer(),
+        customer({
+          id: 'cust-2',
+          name: 'Oriel Mews Lettings',
+          contactName: null,
+          phone: null,
+          email: null,
+          jobCount: 0,
+        }),
+      ]),
     });
     const { user } = renderWithProviders(<AppRoutes />, { route: '/customers' });
     const row = (await screen.findByText('Harrow Lane Surgery')).closest('tr')!;
     expect(within(row).getByText('Priya Lennox')).toBeInTheDocument();
     expect(within(row).getByText('01632 960 118 · practice@harrowlane.test')).toBeInTheDocument();
     expect(within(row).getByText('2')).toBeInTheDocument();
-    const urls = () => fetchMock.mock.calls.map((c) => String(c[0])).filter((u) => u.includes('/api/customers?'));
+    const urls = () =>
+      fetchMock.mock.calls.map((c) => String(c[0])).filter((u) => u.includes('/api/customers?'));
     expect(urls()[0]).toContain('sort=name');
 
     await user.type(screen.getByRole('textbox', { name: 'Search customers' }), 'harrow');
@@ -44,7 +55,9 @@ describe('the customers screen', () => {
       'GET /api/customers': page([]),
     });
     renderWithProviders(<AppRoutes />, { route: '/customers' });
-    expect(await screen.findByText('No customers yet. Add one with “New customer”, or with a new job.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('No customers yet. Add one with “New customer”, or with a new job.'),
+    ).toBeInTheDocument();
     expect(screen.getAllByRole('link', { name: /Customers/ }).length).toBeGreaterThan(0);
   });
 
@@ -77,7 +90,9 @@ describe('the customers screen', () => {
     await user.type(within(form).getByLabelText('Name'), 'Quayside Chandlery');
     await user.type(within(form).getByLabelText('E-mail'), 'not-an-address');
     await user.click(within(form).getByRole('button', { name: 'Add customer' }));
-    expect(await within(form).findByText('Enter a whole e-mail address, like name@example.com')).toBeInTheDocument();
+    expect(
+      await within(form).findByText('Enter a whole e-mail address, like name@example.com'),
+    ).toBeInTheDocument();
     expect(posted).toHaveLength(0);
     await user.clear(within(form).getByLabelText('E-mail'));
     await user.type(within(form).getByLabelText('E-mail'), 'orders@quayside.test');
@@ -92,7 +107,9 @@ describe('the customers screen', () => {
       billingAddress: '1 Quay Steps, Hollowmere',
       notes: null,
     });
-    expect(await screen.findByText('No jobs for this customer yet. Start one from Jobs with “New job”.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('No jobs for this customer yet. Start one from Jobs with “New job”.'),
+    ).toBeInTheDocument();
   }, 30_000);
 });
 
@@ -103,7 +120,17 @@ describe('a customer’s page', () => {
       'GET /api/auth/me': json(sessionUser('owner')),
       'GET /api/customers/cust-1': json(customer()),
       'GET /api/jobs': json({
-        items: [customerJob(), customerJob({ id: 'job-2', reference: 'J-0007', title: 'Porch roof', status: 'enquiry', value: null, scheduledOn: null })],
+        items: [
+          customerJob(),
+          customerJob({
+            id: 'job-2',
+            reference: 'J-0007',
+            title: 'Porch roof',
+            status: 'enquiry',
+            value: null,
+            scheduledOn: null,
+          }),
+        ],
         total: 2,
         page: 1,
         pageSize: 10,
@@ -111,7 +138,10 @@ describe('a customer’s page', () => {
     });
     renderWithProviders(<AppRoutes />, { route: '/customers/cust-1' });
     expect(await screen.findByRole('heading', { name: 'Harrow Lane Surgery' })).toBeInTheDocument();
-    expect(screen.getByRole('link', { name: 'practice@harrowlane.test' })).toHaveAttribute('href', 'mailto:practice@harrowlane.test');
+    expect(screen.getByRole('link', { name: 'practice@harrowlane.test' })).toHaveAttribute(
+      'href',
+      'mailto:practice@harrowlane.test',
+    );
     const row = (await screen.findByText('J-0012 · Rear extension flat roof')).closest('tr')!;
     expect(within(row).getByText('Won')).toBeInTheDocument();
     expect(within(row).getByText('£2,417.33')).toBeInTheDocument();
@@ -120,7 +150,10 @@ describe('a customer’s page', () => {
     expect(within(other).getByText('Not accepted')).toBeInTheDocument();
     expect(within(other).getByText('Enquiry')).toBeInTheDocument();
     expect(fetchMock.mock.calls.some((c) => String(c[0]).includes('/api/jobs?customerId=cust-1'))).toBe(true);
-    expect(screen.getByRole('link', { name: 'J-0012 · Rear extension flat roof' })).toHaveAttribute('href', '/jobs/job-1');
+    expect(screen.getByRole('link', { name: 'J-0012 · Rear extension flat roof' })).toHaveAttribute(
+      'href',
+      '/jobs/job-1',
+    );
   });
 
   it('edits the customer and sends only what the form holds', async () => {
@@ -141,7 +174,11 @@ describe('a customer’s page', () => {
     await user.clear(within(form).getByLabelText('Phone'));
     await user.click(within(form).getByRole('button', { name: 'Save' }));
     await waitFor(() => expect(patched).toHaveLength(1));
-    expect(patched[0]!.body).toMatchObject({ name: 'Harrow Lane Surgery', phone: null, contactName: 'Priya Lennox' });
+    expect(patched[0]!.body).toMatchObject({
+      name: 'Harrow Lane Surgery',
+      phone: null,
+      contactName: 'Priya Lennox',
+    });
   });
 
   it('says so when the customer is not there', async () => {

@@ -1,5 +1,7 @@
 // Query keys of the jobs screens, hierarchical so a mutation can refresh by prefix: anything under
 // ['jobs'] (lists, a job and its roof, estimates and materials, the calendar) or ['customers'].
+import { customersKey } from '../../../lib/customers';
+
 export interface JobFilters {
   statuses: string[];
   q: string;
@@ -20,7 +22,7 @@ export const jobsKeys = {
 };
 
 export const customersKeys = {
-  all: ['customers'] as const,
+  all: customersKey,
   search: (q: string) => [...customersKeys.all, 'search', q] as const,
 };
 

@@ -71,18 +71,7 @@ export interface Page<T> {
   pageSize: number;
 }
 
-export interface Customer {
-  id: string;
-  name: string;
-  contactName: string | null;
-  email: string | null;
-  phone: string | null;
-  billingAddress: string | null;
-  notes: string | null;
-  jobCount: number;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { Customer } from '../../../lib/customers';
 
 /** A build-up as the estimator chooses it (the rates are the owner's business). */
 export interface BuildUpChoice {

@@ -18,7 +18,7 @@ import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { useState } from 'react';
 import { z } from 'zod';
 import { useBuildUps } from '../api/get-build-ups';
-import { useCreateCustomer } from '../api/create-customer';
+import { useCreateCustomer } from '../../../lib/customers';
 import { useCreateJob } from '../api/create-job';
 import { useCustomers } from '../api/get-customers';
 import { useEstimators } from '../api/get-estimators';

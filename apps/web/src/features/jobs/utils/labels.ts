@@ -1,29 +1,7 @@
 import type { JobStatus } from '@potlife/domain';
 import type { MaterialState, Substrate } from '../api/types';
 
-export const statusLabels: Record<JobStatus, string> = {
-  enquiry: 'Enquiry',
-  quoted: 'Quoted',
-  won: 'Won',
-  scheduled: 'Scheduled',
-  'in-progress': 'In progress',
-  complete: 'Complete',
-  invoiced: 'Invoiced',
-  lost: 'Lost',
-  cancelled: 'Cancelled',
-};
-
-export const statusColors: Record<JobStatus, string> = {
-  enquiry: 'gray',
-  quoted: 'blue',
-  won: 'teal',
-  scheduled: 'indigo',
-  'in-progress': 'resin',
-  complete: 'green',
-  invoiced: 'dark',
-  lost: 'red',
-  cancelled: 'red',
-};
+export { statusColors, statusLabels } from '../../../lib/job-status';
 
 /** The button that moves a job to a state, as a verb. */
 export const statusActions: Record<JobStatus, string> = {

@@ -1,6 +1,6 @@
 import type { JobStatus } from '@potlife/domain';
 
-// A job's status as the customers screens name it (the same words as the jobs screens).
+// A job's status in words and colour, for every screen that lists jobs (jobs, calendar, customers).
 export const statusLabels: Record<JobStatus, string> = {
   enquiry: 'Enquiry',
   quoted: 'Quoted',
