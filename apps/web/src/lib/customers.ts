@@ -27,6 +27,11 @@ export interface CustomerBody {
   notes?: string | null;
 }
 
+/** Router state that opens New job on the jobs list with this customer chosen. */
+export interface NewJobFor {
+  newJobFor: { id: string; name: string };
+}
+
 /** Every customer query sits under this key: the customers screens' lists and New job's search. */
 export const customersKey = ['customers'] as const;
 

@@ -11,7 +11,7 @@ import {
   Title,
 } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconPencil } from '@tabler/icons-react';
+import { IconPencil, IconPlus } from '@tabler/icons-react';
 import { DataTable, type DataTableSortStatus } from 'mantine-datatable';
 import { useState, type ReactNode } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
@@ -21,6 +21,7 @@ import { hrefs, paths } from '../../../config/paths';
 import { formatMoney } from '../../../lib/amounts';
 import { isApiError } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
+import type { NewJobFor } from '../../../lib/customers';
 import { useCustomer } from '../api/get-customer';
 import { useCustomerJobs } from '../api/get-customer-jobs';
 import type { CustomerJob } from '../api/types';
@@ -100,9 +101,19 @@ export function CustomerRoute() {
       </Breadcrumbs>
       <Group justify="space-between" align="flex-start" wrap="wrap">
         <Title order={1}>{c.name}</Title>
-        <Button variant="default" leftSection={<IconPencil size={16} />} onClick={edit.open}>
-          Edit customer
-        </Button>
+        <Group gap="sm">
+          <Button variant="default" leftSection={<IconPencil size={16} />} onClick={edit.open}>
+            Edit customer
+          </Button>
+          <Button
+            component={Link}
+            to={paths.jobs}
+            state={{ newJobFor: { id: c.id, name: c.name } } satisfies NewJobFor}
+            leftSection={<IconPlus size={16} />}
+          >
+            New job for {c.name}
+          </Button>
+        </Group>
       </Group>
       <Paper withBorder p="md" radius="md">
         <SimpleGrid cols={{ base: 1, xs: 2, md: 4 }} spacing="md">

@@ -191,4 +191,25 @@ describe('a customer’s page', () => {
     renderWithProviders(<AppRoutes />, { route: '/customers/nope' });
     expect(await screen.findByRole('heading', { name: 'Customer not found' })).toBeInTheDocument();
   });
+
+  it('starts a new job for the customer from their page, with them chosen', async () => {
+    setAccessToken('token');
+    mockApi({
+      'GET /api/auth/me': json(sessionUser('estimator')),
+      'GET /api/customers/cust-1': json(customer()),
+      'GET /api/customers': page([]),
+      'GET /api/jobs': page([]),
+      'GET /api/build-ups': json([]),
+      'GET /api/users/estimators': json([]),
+    });
+    const { user } = renderWithProviders(<AppRoutes />, { route: '/customers/cust-1' });
+    await user.click(await screen.findByRole('link', { name: 'New job for Harrow Lane Surgery' }));
+    const dialog = await screen.findByRole('dialog');
+    await waitFor(() =>
+      expect(within(dialog).getByPlaceholderText('Type to search by name, contact or e-mail')).toHaveValue(
+        'Harrow Lane Surgery',
+      ),
+    );
+    expect(currentLocation()).toMatch(/^\/jobs/);
+  });
 });

@@ -15,7 +15,7 @@ import { useForm } from '@mantine/form';
 import { useDebouncedValue } from '@mantine/hooks';
 import { notifications } from '@mantine/notifications';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { z } from 'zod';
 import { useBuildUps } from '../api/get-build-ups';
 import { useCreateCustomer } from '../../../lib/customers';
@@ -116,12 +116,14 @@ const orNull = (v: string) => (v.trim() === '' ? null : v.trim());
 
 interface CreateJobModalProps {
   opened: boolean;
+  /** a customer to start with (from the customer's page) */
+  forCustomer?: { id: string; name: string } | null;
   onClose: () => void;
   onCreated: (job: JobDetail) => void;
 }
 
 /** A new job: its customer (chosen or added here), the site and what the roof is laid on. */
-export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalProps) {
+export function CreateJobModal({ opened, forCustomer = null, onClose, onCreated }: CreateJobModalProps) {
   const me = useSessionUser();
   // The estimator is me when I estimate; otherwise the form asks (the API checks either way).
   const mine = me.role === 'owner' || me.role === 'estimator' ? me.id : null;
@@ -138,6 +140,15 @@ export function CreateJobModal({ opened, onClose, onCreated }: CreateJobModalPro
   const createJob = useCreateJob();
   // A customer added here is kept even if the job then fails, so nothing is typed twice.
   const [added, setAdded] = useState<{ id: string; name: string } | null>(null);
+  // Opened from a customer's page: that customer, chosen and in the list.
+  useEffect(() => {
+    if (opened && forCustomer) {
+      setAdded(forCustomer);
+      form.setValues({ customerMode: 'existing', customerId: forCustomer.id });
+    }
+    // Only a new opening or another customer drives this.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [opened, forCustomer?.id]);
 
   const close = () => {
     form.reset();

@@ -12,7 +12,14 @@ import {
   Title,
 } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconCalculator, IconClockHour4, IconFiles, IconPackages, IconPencil, IconRuler2 } from '@tabler/icons-react';
+import {
+  IconCalculator,
+  IconClockHour4,
+  IconFiles,
+  IconPackages,
+  IconPencil,
+  IconRuler2,
+} from '@tabler/icons-react';
 import { useState, type ReactNode } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { PageLoader } from '../../../components/PageLoader';

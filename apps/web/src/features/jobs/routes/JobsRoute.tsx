@@ -3,7 +3,8 @@ import { useDebouncedValue, useDisclosure } from '@mantine/hooks';
 import { JOB_STATUSES, type JobStatus } from '@potlife/domain';
 import { IconPlus, IconSearch } from '@tabler/icons-react';
 import { useEffect, useState } from 'react';
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useLocation, useNavigate, useSearchParams } from 'react-router-dom';
+import type { NewJobFor } from '../../../lib/customers';
 import { PageHeader } from '../../../components/PageHeader';
 import { PageLoader } from '../../../components/PageLoader';
 import { QueryError } from '../../../components/QueryError';
@@ -25,7 +26,10 @@ export function JobsRoute() {
   const user = useSessionUser();
   const navigate = useNavigate();
   const [params, setParams] = useSearchParams();
-  const [createOpened, create] = useDisclosure(false);
+  // The customer page's "New job for …" comes here with the customer in the router state.
+  const location = useLocation();
+  const forCustomer = (location.state as Partial<NewJobFor> | null)?.newJobFor ?? null;
+  const [createOpened, create] = useDisclosure(forCustomer !== null);
   const canEdit = user.role !== 'storeman';
 
   const statuses = (params.get('status') ?? '').split(',').filter(isStatus);
@@ -139,7 +143,13 @@ export function JobsRoute() {
       {canEdit ? (
         <CreateJobModal
           opened={createOpened}
-          onClose={create.close}
+          forCustomer={forCustomer}
+          onClose={() => {
+            create.close();
+            if (forCustomer) {
+              void navigate({ search: location.search }, { replace: true, state: null });
+            }
+          }}
           onCreated={(job) => navigate(hrefs.job(job.id))}
         />
       ) : null}

@@ -144,8 +144,26 @@ describe('the estimate tab', () => {
           stockQuantity: '40',
           packs: [
             // invented: 40 m² of lot M-7 at £1.9375 = £77.50, then one 30 m² roll at £58.00
-            { source: 'stock', lot: { id: 'lot-7', batchNumber: 'M-7', unitCost: '1.9375' }, size: '40', label: 'From stock, lot M-7', count: 1, packPrice: '77.50', supplier: null, cost: '77.50' },
-            { source: 'supplier', lot: null, size: '30', label: '30 m² roll', count: 1, packPrice: '58.00', supplier: null, cost: '58.00' },
+            {
+              source: 'stock',
+              lot: { id: 'lot-7', batchNumber: 'M-7', unitCost: '1.9375' },
+              size: '40',
+              label: 'From stock, lot M-7',
+              count: 1,
+              packPrice: '77.50',
+              supplier: null,
+              cost: '77.50',
+            },
+            {
+              source: 'supplier',
+              lot: null,
+              size: '30',
+              label: '30 m² roll',
+              count: 1,
+              packPrice: '58.00',
+              supplier: null,
+              cost: '58.00',
+            },
           ],
           cost: '135.50',
         },
@@ -177,7 +195,9 @@ describe('the estimate tab', () => {
     const { user } = renderWithProviders(<AppRoutes />, { route: `/jobs/${JOB_ID}?tab=estimate` });
     expect(await screen.findByRole('heading', { name: 'Version 1' })).toBeInTheDocument();
     await user.click(screen.getByRole('radio', { name: 'Stock the job can reserve' }));
-    expect(screen.getByText(/Lots this job could reserve for its date, at what they cost/)).toBeInTheDocument();
+    expect(
+      screen.getByText(/Lots this job could reserve for its date, at what they cost/),
+    ).toBeInTheDocument();
     // The catalogue is asked only when the section is opened.
     expect(kinds).toHaveLength(0);
     await user.click(screen.getByRole('button', { name: /Materials for this run/ }));
@@ -206,7 +226,9 @@ describe('the estimate tab', () => {
   it('leaves a role to best fit when asked, and offers stock cost only to a job with a date', async () => {
     const posts: MockRequest[] = [];
     signedIn({
-      [`GET /api/jobs/${JOB_ID}`]: json(jobDetail({ acceptedEstimate: { id: 'est-1', version: 1 }, scheduledOn: null })),
+      [`GET /api/jobs/${JOB_ID}`]: json(
+        jobDetail({ acceptedEstimate: { id: 'est-1', version: 1 }, scheduledOn: null }),
+      ),
       'GET /api/materials': json({ items: [], total: 0, page: 1, pageSize: 100 }),
       [`POST /api/jobs/${JOB_ID}/estimates`]: (request) => {
         posts.push(request);

@@ -28,7 +28,9 @@ export function packsText(m: EstimateMaterial): string {
   }
   return m.packs
     .map((p) =>
-      p.source === 'stock' ? `${formatQuantity(p.size, m.unit, 3)} from stock (${lotName(p)})` : `${p.count} × ${p.label}`,
+      p.source === 'stock'
+        ? `${formatQuantity(p.size, m.unit, 3)} from stock (${lotName(p)})`
+        : `${p.count} × ${p.label}`,
     )
     .join(' + ');
 }

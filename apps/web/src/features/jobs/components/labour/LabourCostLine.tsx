@@ -17,7 +17,11 @@ export function LabourCostLine({ reconciliation }: { reconciliation: Pick<Reconc
     return null;
   }
   return (
-    <Text size="sm" c={reconciliation.labour.basis === 'recorded' ? undefined : 'dimmed'} data-testid="labour-basis">
+    <Text
+      size="sm"
+      c={reconciliation.labour.basis === 'recorded' ? undefined : 'dimmed'}
+      data-testid="labour-basis"
+    >
       {labourBasisText(reconciliation)}
     </Text>
   );

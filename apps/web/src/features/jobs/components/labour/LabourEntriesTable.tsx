@@ -40,7 +40,8 @@ export function LabourEntriesTable({ jobId, entries, canStrike }: LabourEntriesT
   const shown = useMemo(() => entries.filter((e) => showStruck || e.removed === null), [entries, showStruck]);
   const table = useClientTable<LabourEntry>(shown, {
     searchText: (e) => `${e.crewMember} ${e.note ?? ''}`,
-    sortValue: (e, column) => (column === 'hours' ? Number(e.hours) : (e as unknown as Record<string, unknown>)[column]),
+    sortValue: (e, column) =>
+      column === 'hours' ? Number(e.hours) : (e as unknown as Record<string, unknown>)[column],
     initialSort: { columnAccessor: 'workedOn', direction: 'desc' },
     pageSizes: [10, 25, 50],
   });
@@ -60,11 +61,13 @@ export function LabourEntriesTable({ jobId, entries, canStrike }: LabourEntriesT
       ),
       labels: { confirm: 'Strike out', cancel: 'Keep it' },
       confirmProps: { color: 'red' },
-      onConfirm: () => remove.mutate({ entryId: entry.id, reason: reason.trim() === '' ? null : reason.trim() }),
+      onConfirm: () =>
+        remove.mutate({ entryId: entry.id, reason: reason.trim() === '' ? null : reason.trim() }),
     });
   };
 
-  const crossed = (e: LabourEntry) => (e.removed ? { textDecoration: 'line-through', opacity: 0.6 } : undefined);
+  const crossed = (e: LabourEntry) =>
+    e.removed ? { textDecoration: 'line-through', opacity: 0.6 } : undefined;
 
   return (
     <Stack gap="sm">
@@ -124,7 +127,11 @@ export function LabourEntriesTable({ jobId, entries, canStrike }: LabourEntriesT
             title: 'Note',
             render: (e) => (
               <Stack gap={2}>
-                {e.note ? <Text size="sm" style={crossed(e)}>{e.note}</Text> : null}
+                {e.note ? (
+                  <Text size="sm" style={crossed(e)}>
+                    {e.note}
+                  </Text>
+                ) : null}
                 {e.removed ? (
                   <Text size="xs" c="red">
                     Struck out by {e.removed.by?.name ?? 'someone'} on {formatDateTime(e.removed.at)}

@@ -80,7 +80,8 @@ describe('the labour tab', () => {
       [`GET /api/jobs/${JOB_ID}`]: json(inProgress),
       [`GET /api/jobs/${JOB_ID}/roof`]: json({ jobId: JOB_ID, updatedAt: null, roof: null, summary: null }),
       [`GET /api/jobs/${JOB_ID}/labour`]: json(sheet([], { recordedHours: '0', byCrewMember: [] })),
-      [`GET /api/jobs/${JOB_ID}/reconciliation`]: () => json(reconciliation(recorded ? 'recorded' : 'estimate')),
+      [`GET /api/jobs/${JOB_ID}/reconciliation`]: () =>
+        json(reconciliation(recorded ? 'recorded' : 'estimate')),
       [`POST /api/jobs/${JOB_ID}/labour`]: (request) => {
         posted.push(request);
         recorded = true;
@@ -89,7 +90,9 @@ describe('the labour tab', () => {
       'GET /api/build-ups/bu-1': json(buildUp),
     });
     const { user } = renderWithProviders(<AppRoutes />, { route: `/jobs/${JOB_ID}?tab=labour` });
-    expect(await screen.findByText('No hours recorded yet. Record each crew member’s hours for each day above.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('No hours recorded yet. Record each crew member’s hours for each day above.'),
+    ).toBeInTheDocument();
     expect(await screen.findByTestId('labour-basis')).toHaveTextContent(
       'Labour: no hours recorded yet, so the estimate’s 9.7 h (£310.40) stands in.',
     );
@@ -101,7 +104,9 @@ describe('the labour tab', () => {
     await user.clear(within(form).getByLabelText('Hours'));
     await user.type(within(form).getByLabelText('Hours'), '7.555');
     await user.click(within(form).getByRole('button', { name: 'Record hours' }));
-    expect(await within(form).findByText('Enter hours like 7.5 (at most 2 decimal places)')).toBeInTheDocument();
+    expect(
+      await within(form).findByText('Enter hours like 7.5 (at most 2 decimal places)'),
+    ).toBeInTheDocument();
     expect(posted).toHaveLength(0);
 
     await user.clear(within(form).getByLabelText('Hours'));
@@ -136,20 +141,40 @@ describe('the labour tab', () => {
       [`DELETE /api/jobs/${JOB_ID}/labour/lab-1`]: (request) => {
         struck.push(request);
         return json(
-          sheet([entry({ removed: { at: '2026-06-16T08:00:00Z', by: { id: 'user-owner', name: 'Dana Whitlow' }, reason: 'Booked twice' } })], {
-            recordedHours: '0',
-            byCrewMember: [],
-          }),
+          sheet(
+            [
+              entry({
+                removed: {
+                  at: '2026-06-16T08:00:00Z',
+                  by: { id: 'user-owner', name: 'Dana Whitlow' },
+                  reason: 'Booked twice',
+                },
+              }),
+            ],
+            {
+              recordedHours: '0',
+              byCrewMember: [],
+            },
+          ),
         );
       },
     });
     const { user } = renderWithProviders(<AppRoutes />, { route: `/jobs/${JOB_ID}?tab=labour` });
-    await user.click(await screen.findByRole('button', { name: 'Strike out 6.5 h for Jonah Pell on 15 Jun 2026' }));
+    await user.click(
+      await screen.findByRole('button', { name: 'Strike out 6.5 h for Jonah Pell on 15 Jun 2026' }),
+    );
     const dialog = await screen.findByRole('dialog', { name: 'Strike out this entry?' });
     await user.type(within(dialog).getByLabelText('Why (optional)'), 'Booked twice');
     await user.click(within(dialog).getByRole('button', { name: 'Strike out' }));
     await waitFor(() => expect(struck).toHaveLength(1));
-    const url = new URL(String((globalThis.fetch as unknown as { mock: { calls: unknown[][] } }).mock.calls.find((c) => String(c[0]).includes('/labour/lab-1'))![0]), 'http://localhost');
+    const url = new URL(
+      String(
+        (globalThis.fetch as unknown as { mock: { calls: unknown[][] } }).mock.calls.find((c) =>
+          String(c[0]).includes('/labour/lab-1'),
+        )![0],
+      ),
+      'http://localhost',
+    );
     expect(url.searchParams.get('reason')).toBe('Booked twice');
     expect(await screen.findByText(/Struck out by Dana Whitlow on .*: Booked twice/)).toBeInTheDocument();
   }, 30_000);
@@ -162,11 +187,16 @@ describe('the labour tab', () => {
       [`GET /api/jobs/${JOB_ID}`]: json({ ...noValue, status: 'invoiced', nextStatuses: [] }),
       [`GET /api/jobs/${JOB_ID}/roof`]: json({ jobId: JOB_ID, updatedAt: null, roof: null, summary: null }),
       [`GET /api/jobs/${JOB_ID}/labour`]: json(
-        sheet([entry()], { open: false, closedReason: 'J-0012 is invoiced: its hours are closed and can only be read' }),
+        sheet([entry()], {
+          open: false,
+          closedReason: 'J-0012 is invoiced: its hours are closed and can only be read',
+        }),
       ),
     });
     renderWithProviders(<AppRoutes />, { route: `/jobs/${JOB_ID}?tab=labour` });
-    expect(await screen.findByText('J-0012 is invoiced: its hours are closed and can only be read')).toBeInTheDocument();
+    expect(
+      await screen.findByText('J-0012 is invoiced: its hours are closed and can only be read'),
+    ).toBeInTheDocument();
     expect(screen.getByText('Jonah Pell', { selector: 'span' })).toBeInTheDocument();
     expect(screen.queryByRole('form', { name: 'Record hours' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Strike out/ })).not.toBeInTheDocument();
@@ -182,7 +212,25 @@ describe('the job’s estimator', () => {
     mockApi({
       'GET /api/auth/me': json(sessionUser('estimator')),
       'GET /api/jobs': json({ items: [inProgress], total: 1, page: 1, pageSize: 25 }),
-      'GET /api/customers': json({ items: [{ id: 'cust-1', name: 'Harrow Lane Surgery', contactName: null, email: null, phone: null, billingAddress: null, notes: null, jobCount: 1, createdAt: '', updatedAt: '' }], total: 1, page: 1, pageSize: 50 }),
+      'GET /api/customers': json({
+        items: [
+          {
+            id: 'cust-1',
+            name: 'Harrow Lane Surgery',
+            contactName: null,
+            email: null,
+            phone: null,
+            billingAddress: null,
+            notes: null,
+            jobCount: 1,
+            createdAt: '',
+            updatedAt: '',
+          },
+        ],
+        total: 1,
+        page: 1,
+        pageSize: 50,
+      }),
       'GET /api/build-ups': json([buildUp]),
       'GET /api/users/estimators': json([
         { id: 'user-owner', name: 'Dana Whitlow', role: 'owner' },

@@ -59,7 +59,14 @@ export function LabourTab({ job, canEdit }: LabourTabProps) {
       <Paper withBorder p="md" radius="md" component="section" aria-label="Hours on the job">
         <Stack gap="sm">
           <SimpleGrid cols={{ base: 2, sm: canEdit ? 4 : 2 }} spacing="sm">
-            <Figure label="Estimated" value={sheet.estimatedHours === null ? 'No estimate accepted' : `${formatNumber(sheet.estimatedHours)} h`} />
+            <Figure
+              label="Estimated"
+              value={
+                sheet.estimatedHours === null
+                  ? 'No estimate accepted'
+                  : `${formatNumber(sheet.estimatedHours)} h`
+              }
+            />
             <Figure label="Recorded" value={`${formatNumber(sheet.recordedHours)} h`} />
             {canEdit && rec.data ? (
               <>
