@@ -19,7 +19,8 @@ import type { Estimate, EstimateMaterial, EstimatePack } from '../../api/types';
 import { formatArea, formatMoney, formatNumber, formatQuantity, unitLabel } from '../../utils/format';
 import { CautionsList } from './CautionsList';
 
-const lotName = (p: EstimatePack) => `lot ${p.lot?.batchNumber ?? p.lot?.id.slice(0, 8) ?? ''}`;
+/** " (lot R-A)" for a lot with a batch number; nothing for one without (trims, fixings). */
+const lotName = (p: EstimatePack) => (p.lot?.batchNumber ? ` (lot ${p.lot.batchNumber})` : '');
 
 /** "6 kg from stock (lot R-A) + 2 × 25 kg drum" */
 export function packsText(m: EstimateMaterial): string {
@@ -29,7 +30,7 @@ export function packsText(m: EstimateMaterial): string {
   return m.packs
     .map((p) =>
       p.source === 'stock'
-        ? `${formatQuantity(p.size, m.unit, 3)} from stock (${lotName(p)})`
+        ? `${formatQuantity(p.size, m.unit, 3)} from stock${lotName(p)}`
         : `${p.count} × ${p.label}`,
     )
     .join(' + ');
@@ -50,7 +51,7 @@ export function packPriceText(m: EstimateMaterial): string {
   return priced
     .map((p) =>
       p.source === 'stock'
-        ? `${unitCostText(p.lot!.unitCost)} / ${unitLabel(m.unit) || 'each'} (${lotName(p)})`
+        ? `${unitCostText(p.lot!.unitCost)} / ${unitLabel(m.unit) || 'each'}${lotName(p)}`
         : `${formatMoney(p.packPrice)} / ${p.label}`,
     )
     .join(', ');
