@@ -68,6 +68,35 @@ describe('demo seed', () => {
     expect(out!.inProgressShort).toBe(0);
   });
 
+  it('says so on screen: the job in progress has everything out, the bay window all reserved, the walkway short', async () => {
+    const login = await t
+      .http()
+      .post('/api/auth/login')
+      .send({ email: 'estimator@demo.test', password: 'potlife-demo' })
+      .expect(200);
+    const headers = { Authorization: `Bearer ${login.body.accessToken as string}` };
+    const jobs = await t.http().get('/api/jobs?pageSize=50').set(headers).expect(200);
+    const byTitle = (title: string) => jobs.body.items.find((j: { title: string }) => j.title === title);
+    const states: Record<string, string> = {};
+    for (const title of [
+      'Workshop roof, Unit 2 Fenn Yard',
+      'Bay window roof, 3 Orchard Rise',
+      'Hall walkway, Chapel Green',
+    ]) {
+      const r = await t
+        .http()
+        .get(`/api/jobs/${byTitle(title).id as string}/reservations`)
+        .set(headers)
+        .expect(200);
+      states[title] = `${byTitle(title).materialState as string}/${r.body.state as string}`;
+    }
+    expect(states).toEqual({
+      'Workshop roof, Unit 2 Fenn Yard': 'issued/issued',
+      'Bay window roof, 3 Orchard Rise': 'reserved/reserved',
+      'Hall walkway, Chapel Green': 'short/short',
+    });
+  });
+
   it('has the hours the crews booked on the finished and started jobs', async () => {
     const rows = await sql<{ status: string; hours: string }>(
       t,

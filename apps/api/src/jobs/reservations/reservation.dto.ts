@@ -147,7 +147,7 @@ export interface ReservationsResponse {
   /** lots must still be in date on this day: job date + margin */
   useBy: string | null;
   estimate: { id: string; version: number } | null;
-  state: 'no-estimate' | 'not-reserved' | 'reserved' | 'short';
+  state: 'no-estimate' | 'not-reserved' | 'reserved' | 'short' | 'issued';
   materials: ReservationMaterialResponse[];
   /** estimate lines that cannot be reserved (no catalogue material, no pack sizes) */
   skipped: { roles: string[]; materialKind: string; reason: string }[];

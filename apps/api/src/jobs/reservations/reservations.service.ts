@@ -630,9 +630,11 @@ export class ReservationsService {
     const state =
       shortfalls.length > 0
         ? 'short'
-        : materials.every((x) => new Decimal(x.outstanding).isZero())
-          ? 'reserved'
-          : 'not-reserved';
+        : !materials.every((x) => new Decimal(x.outstanding).isZero())
+          ? 'not-reserved'
+          : materials.some((x) => new Decimal(x.held).gt(0)) || materials.length === 0
+            ? 'reserved'
+            : 'issued'; // everything the estimate needs has gone out: nothing left to hold
     return {
       jobId: job.id,
       jobDate: job.scheduledOn,

@@ -295,7 +295,7 @@ export interface Reservations {
   marginDays: number;
   useBy: string | null;
   estimate: { id: string; version: number } | null;
-  state: 'no-estimate' | 'not-reserved' | 'reserved' | 'short';
+  state: 'no-estimate' | 'not-reserved' | 'reserved' | 'short' | 'issued';
   materials: ReservationMaterial[];
   skipped: { roles: string[]; materialKind: string; reason: string }[];
   flagged: number;

@@ -120,7 +120,9 @@ export function ReservationsPanel({
                     ? 'green'
                     : reservations.state === 'short'
                       ? 'red'
-                      : 'gray'
+                      : reservations.state === 'issued'
+                        ? 'blue'
+                        : 'gray'
                 }
                 variant="light"
                 leftSection={reservations.state === 'short' ? <IconAlertTriangle size={11} /> : undefined}
