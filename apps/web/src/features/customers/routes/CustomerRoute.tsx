@@ -17,9 +17,9 @@ import { useState, type ReactNode } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { PageLoader } from '../../../components/PageLoader';
 import { QueryError } from '../../../components/QueryError';
+import { RecordError } from '../../../components/RecordError';
 import { hrefs, paths } from '../../../config/paths';
 import { formatMoney } from '../../../lib/amounts';
-import { isApiError } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
 import type { NewJobFor } from '../../../lib/customers';
 import { useCustomer } from '../api/get-customer';
@@ -67,22 +67,12 @@ export function CustomerRoute() {
     return <PageLoader label="Loading the customer…" />;
   }
   if (customer.isError) {
-    if (isApiError(customer.error) && customer.error.status === 404) {
-      return (
-        <Stack gap="sm">
-          <Title order={1}>Customer not found</Title>
-          <Text>
-            This customer does not exist, or belongs to another company.{' '}
-            <Anchor component={Link} to={paths.customers}>
-              Back to the customers
-            </Anchor>
-          </Text>
-        </Stack>
-      );
-    }
     return (
-      <QueryError
+      <RecordError
         what="the customer"
+        notFoundTitle="Customer not found"
+        backTo={paths.customers}
+        backLabel="the customers"
         error={customer.error}
         onRetry={() => void customer.refetch()}
         retrying={customer.isFetching}

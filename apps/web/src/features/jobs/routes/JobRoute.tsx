@@ -23,9 +23,8 @@ import {
 import { useState, type ReactNode } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { PageLoader } from '../../../components/PageLoader';
-import { QueryError } from '../../../components/QueryError';
+import { RecordError } from '../../../components/RecordError';
 import { paths } from '../../../config/paths';
-import { isApiError } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
 import { useSessionUser } from '../../../lib/session';
 import { useJob } from '../api/get-job';
@@ -76,22 +75,12 @@ export function JobRoute() {
     return <PageLoader label="Loading the job…" />;
   }
   if (job.isError) {
-    if (isApiError(job.error) && job.error.status === 404) {
-      return (
-        <Stack gap="sm">
-          <Title order={1}>Job not found</Title>
-          <Text>
-            This job does not exist, or belongs to another company.{' '}
-            <Anchor component={Link} to={paths.jobs}>
-              Back to the jobs
-            </Anchor>
-          </Text>
-        </Stack>
-      );
-    }
     return (
-      <QueryError
+      <RecordError
         what="the job"
+        notFoundTitle="Job not found"
+        backTo={paths.jobs}
+        backLabel="the jobs"
         error={job.error}
         onRetry={() => void job.refetch()}
         retrying={job.isFetching}
