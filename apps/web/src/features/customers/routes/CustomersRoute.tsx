@@ -1,13 +1,13 @@
 import { Button, Stack } from '@mantine/core';
-import { useDebouncedValue, useDisclosure } from '@mantine/hooks';
+import { useDisclosure } from '@mantine/hooks';
 import { IconPlus } from '@tabler/icons-react';
-import { useEffect, useState } from 'react';
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '../../../components/PageHeader';
 import { PageLoader } from '../../../components/PageLoader';
 import { QueryError } from '../../../components/QueryError';
 import { SearchInput } from '../../../components/SearchInput';
 import { hrefs } from '../../../config/paths';
+import { useAddressList } from '../../../lib/use-address-list';
 import { useCustomers } from '../api/get-customers';
 import { CustomerFormModal } from '../components/CustomerFormModal';
 import { CustomersTable, PAGE_SIZES } from '../components/CustomersTable';
@@ -15,39 +15,12 @@ import { CustomersTable, PAGE_SIZES } from '../components/CustomersTable';
 /** Who the company works for: searched, sorted and paged by the API; the filters live in the address. */
 export function CustomersRoute() {
   const navigate = useNavigate();
-  const [params, setParams] = useSearchParams();
+  const { update, query, setQuery, q, sort, page, pageSize } = useAddressList({
+    defaultSort: 'name',
+    pageSizes: PAGE_SIZES,
+  });
   const [addOpened, add] = useDisclosure(false);
-  const sort = params.get('sort') ?? 'name';
-  const page = Math.max(1, Number(params.get('page') ?? '1') || 1);
-  const pageSize = PAGE_SIZES.includes(Number(params.get('size'))) ? Number(params.get('size')) : 25;
-  const [query, setQuery] = useState(params.get('q') ?? '');
-  const [debounced] = useDebouncedValue(query, 300);
 
-  const update = (changes: Record<string, string | null>) =>
-    setParams(
-      (current) => {
-        const next = new URLSearchParams(current);
-        for (const [key, value] of Object.entries(changes)) {
-          if (value === null || value === '') {
-            next.delete(key);
-          } else {
-            next.set(key, value);
-          }
-        }
-        return next;
-      },
-      { replace: true },
-    );
-
-  useEffect(() => {
-    if ((params.get('q') ?? '') !== debounced.trim()) {
-      update({ q: debounced.trim(), page: null });
-    }
-    // Only the typed text drives this.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [debounced]);
-
-  const q = params.get('q') ?? '';
   const customers = useCustomers({ q, sort, page, pageSize });
 
   return (

@@ -1,10 +1,10 @@
 import { Button, CloseButton, Group, MultiSelect, Stack, TextInput } from '@mantine/core';
-import { useDebouncedValue, useDisclosure } from '@mantine/hooks';
+import { useDisclosure } from '@mantine/hooks';
 import { JOB_STATUSES, type JobStatus } from '@potlife/domain';
 import { IconPlus, IconSearch } from '@tabler/icons-react';
-import { useEffect, useState } from 'react';
-import { useLocation, useNavigate, useSearchParams } from 'react-router-dom';
+import { useLocation, useNavigate } from 'react-router-dom';
 import type { NewJobFor } from '../../../lib/customers';
+import { useAddressList } from '../../../lib/use-address-list';
 import { PageHeader } from '../../../components/PageHeader';
 import { PageLoader } from '../../../components/PageLoader';
 import { QueryError } from '../../../components/QueryError';
@@ -25,7 +25,10 @@ function isStatus(value: string): value is JobStatus {
 export function JobsRoute() {
   const user = useSessionUser();
   const navigate = useNavigate();
-  const [params, setParams] = useSearchParams();
+  const { params, update, query, setQuery, q, sort, page, pageSize } = useAddressList({
+    defaultSort: '-number',
+    pageSizes: PAGE_SIZES,
+  });
   // The customer page's "New job for …" comes here with the customer in the router state.
   const location = useLocation();
   const forCustomer = (location.state as Partial<NewJobFor> | null)?.newJobFor ?? null;
@@ -33,37 +36,6 @@ export function JobsRoute() {
   const canEdit = user.role !== 'storeman';
 
   const statuses = (params.get('status') ?? '').split(',').filter(isStatus);
-  const sort = params.get('sort') ?? '-number';
-  const page = Math.max(1, Number(params.get('page') ?? '1') || 1);
-  const pageSize = PAGE_SIZES.includes(Number(params.get('size'))) ? Number(params.get('size')) : 25;
-  const [query, setQuery] = useState(params.get('q') ?? '');
-  const [debounced] = useDebouncedValue(query, 300);
-
-  const update = (changes: Record<string, string | null>) =>
-    setParams(
-      (current) => {
-        const next = new URLSearchParams(current);
-        for (const [key, value] of Object.entries(changes)) {
-          if (value === null || value === '') {
-            next.delete(key);
-          } else {
-            next.set(key, value);
-          }
-        }
-        return next;
-      },
-      { replace: true },
-    );
-
-  useEffect(() => {
-    if ((params.get('q') ?? '') !== debounced.trim()) {
-      update({ q: debounced.trim(), page: null });
-    }
-    // Only the typed text drives this.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [debounced]);
-
-  const q = params.get('q') ?? '';
   const jobs = useJobs({ statuses, q, sort, page, pageSize });
 
   const filtered = statuses.length > 0 || q !== '';
