@@ -54,9 +54,18 @@ export class MailProcessor implements OnModuleDestroy {
   async failed(job: Job<{ outgoingMailId: string }>, err: Error): Promise<void> {
     const final = job.attemptsMade >= (job.opts.attempts ?? 1);
     this.logger.warn(`mail ${job.data.outgoingMailId} attempt ${job.attemptsMade} failed: ${err.message}`);
-    await this.db
-      .getRepository(OutgoingMail)
-      .update(job.data.outgoingMailId, { lastError: err.message.slice(0, 2000), ...(final ? { status: 'failed' } : {}) });
+    // An event handler: nothing awaits it, so it must never reject. When the database is away (or
+    // closing, as the process shuts down) the error is logged; the next attempt records it again.
+    try {
+      await this.db
+        .getRepository(OutgoingMail)
+        .update(job.data.outgoingMailId, {
+          lastError: err.message.slice(0, 2000),
+          ...(final ? { status: 'failed' } : {}),
+        });
+    } catch (e) {
+      this.logger.warn(`mail ${job.data.outgoingMailId}: the failure could not be recorded: ${String(e)}`);
+    }
   }
 
   onModuleDestroy(): void {
